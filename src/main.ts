@@ -1,0 +1,13 @@
+/** Entry: start the app's services, then mount the screens. */
+import { mount } from 'svelte';
+import App from './ui/App.svelte';
+import './ui/theme.css';
+import { deviceStatus } from './app/device-status.svelte.ts';
+import { navigation } from './app/navigation.svelte.ts';
+import { updateState } from './app/update-state.svelte.ts';
+
+deviceStatus.start();
+navigation.start();
+updateState.start();
+
+mount(App, { target: document.getElementById('app')! });

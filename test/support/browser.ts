@@ -1,0 +1,63 @@
+/**
+ * Real Chromium for browser tests, benchmarks and the icon renderer: Debian's /usr/bin/chromium
+ * (or CHROME_PATH) driven by playwright-core. Never downloads a browser.
+ */
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type Browser, type BrowserContext } from 'playwright-core';
+
+/** Flags proven on this machine as root, without network (toolchain notes). */
+export const CHROMIUM_ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+/** A phone: 390 × 844 CSS px at 2× with touch (a common mid-size handset). */
+export const PHONE = {
+  viewport: { width: 390, height: 844 },
+  deviceScaleFactor: 2,
+  isMobile: true,
+  hasTouch: true,
+} as const;
+
+export const INSTALL_HINT =
+  'Chromium not found: browser tests need it. Install it (on Debian: apt-get install chromium) or set CHROME_PATH.';
+
+/** Where Chromium is, or undefined. */
+export function findChromium(): string | undefined {
+  const candidates = [process.env.CHROME_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'];
+  return candidates.find((p): p is string => !!p && existsSync(p));
+}
+
+export async function launchBrowser(): Promise<Browser | undefined> {
+  const executablePath = findChromium();
+  if (!executablePath) return undefined;
+  return chromium.launch({ executablePath, headless: true, args: CHROMIUM_ARGS });
+}
+
+/** A fresh phone profile (its own storage and service workers); close() removes it. */
+export async function openPhone(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
+  const executablePath = findChromium();
+  if (!executablePath) throw new Error(INSTALL_HINT);
+  const profile = mkdtempSync(join(tmpdir(), 'ventwalk-phone-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath,
+    headless: true,
+    args: CHROMIUM_ARGS,
+    ...PHONE,
+    serviceWorkers: 'allow',
+  });
+  return {
+    context,
+    close: async () => {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
