@@ -200,3 +200,32 @@ export function toDisplayUnits(si: number, kind: QuantityKind, system: UnitSyste
 export function displayUnit(kind: QuantityKind, system: UnitSystem = 'si'): string {
   return (system === 'si' ? SI_RULES : IMPERIAL_RULES)[kind].unit;
 }
+
+/** ppm per unit volume fraction: a CO2 source of G m³/s into Q m³/s raises the level by 1e6·G/Q ppm. */
+export const PPM_PER_VOLUME_FRACTION = 1e6;
+
+/** Offset between the Celsius and Kelvin scales (exact, SI Brochure 9th ed.). */
+export const KELVIN_AT_ZERO_CELSIUS = 273.15;
+
+/** Standard atmosphere at sea level in Pa (exact, ISO 2533). */
+export const STANDARD_PRESSURE_PA = 101325;
+
+/** °C -> K. Example: kelvin(20) = 293.15. */
+export function kelvin(temp_C: number): number {
+  return temp_C + KELVIN_AT_ZERO_CELSIUS;
+}
+
+/** Pa -> kPa. Example: kilopascals(101325) = 101.325. */
+export function kilopascals(pressure_Pa: number): number {
+  return pressure_Pa / 1000;
+}
+
+/** g/h -> kg/s (moisture sources are quoted in g/h). Example: fromGramsPerHour(3600) = 0.001. */
+export function fromGramsPerHour(rate_gh: number): number {
+  return rate_gh / 1000 / SECONDS_PER_HOUR;
+}
+
+/** kg/s -> g/h. Example: gramsPerHour(0.001) = 3600. */
+export function gramsPerHour(rate_kgs: number): number {
+  return rate_kgs * 1000 * SECONDS_PER_HOUR;
+}
