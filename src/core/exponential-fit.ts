@@ -41,6 +41,10 @@ export interface ExponentialFit {
   atSearchLimit: boolean;
 }
 
+/**
+ * Linear least squares for the c_j at a fixed λ. The residual sum comes from the same pass
+ * (Σr² − cᵀGᵀr), which is enough to compare λ values during the search; the polish recomputes it.
+ */
 function linearCoefficients(
   model: SeparableExponentialModel,
   rate: number,
@@ -51,17 +55,22 @@ function linearCoefficients(
   const ata = Array.from({ length: m }, () => new Array<number>(m).fill(0));
   const atr = new Array<number>(m).fill(0);
   const g = new Array<number>(m);
+  let rr = 0;
   for (let i = 0; i < t.length; i++) {
     const r = y[i]! - model.fixed(rate, t[i]!)[0];
+    rr += r * r;
     for (let j = 0; j < m; j++) g[j] = model.basis(j, rate, t[i]!)[0];
     for (let j = 0; j < m; j++) {
       atr[j]! += g[j]! * r;
-      for (let k = 0; k < m; k++) ata[j]![k]! += g[j]! * g[k]!;
+      for (let k = j; k < m; k++) ata[j]![k]! += g[j]! * g[k]!;
     }
   }
+  for (let j = 0; j < m; j++) for (let k = 0; k < j; k++) ata[j]![k] = ata[k]![j]!;
   const c = solveLinearSystem(ata, atr);
   if (!c) return null;
-  return { c, rss: residualSumOfSquares(model, rate, c, t, y) };
+  let explained = 0;
+  for (let j = 0; j < m; j++) explained += c[j]! * atr[j]!;
+  return { c, rss: Math.max(0, rr - explained) };
 }
 
 function residualSumOfSquares(
@@ -118,7 +127,7 @@ function searchRate(
   const profile = (lnRate: number): number => linearCoefficients(model, Math.exp(lnRate), t, y)?.rss ?? Infinity;
 
   // Coarse scan on ln λ, then golden-section search between the neighbours of the best point.
-  const steps = 40;
+  const steps = 24;
   let best = 0;
   let bestValue = Infinity;
   for (let i = 0; i <= steps; i++) {
@@ -135,7 +144,7 @@ function searchRate(
   let x2 = a + GOLDEN * (b - a);
   let f1 = profile(x1);
   let f2 = profile(x2);
-  while (b - a > 1e-5) {
+  while (b - a > 1e-3) {
     if (f1 < f2) {
       b = x2;
       x2 = x1;
@@ -165,7 +174,7 @@ function polish(
   const start = linearCoefficients(model, rate, t, y);
   if (!start) return null;
   let c = start.c;
-  let rss = start.rss;
+  let rss = residualSumOfSquares(model, rate, c, t, y);
 
   // Gauss–Newton polish on [λ, c…] with step halving; also gives JᵀJ for the covariance.
   const p = 1 + model.basisCount;
