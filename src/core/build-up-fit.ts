@@ -8,9 +8,9 @@
  * Intervals are linearised (GUM §5.1) over the meter's offset and gain, the outdoor level, the
  * volume, the occupant count and output, and the fit's own t-distributed error.
  */
-import { fitSeparableExponential, type SeparableExponentialModel } from './exponential-fit.ts';
+import { EXPONENTIAL_APPROACH_MODEL, fitSeparableExponential, type SeparableExponentialModel } from './exponential-fit.ts';
 import { linearisedFigures, nominalInputs, trueLevel, type TrueInputs } from './supply-uncertainty.ts';
-import { NO_FIGURES, type Reading, type SupplyEstimate, type SupplyMethod, type UncertaintyInputs } from './supply-estimate.ts';
+import { NO_FIGURES, toSupplyEstimate, type Reading, type SupplyEstimate, type SupplyMethod, type UncertaintyInputs } from './supply-estimate.ts';
 import { PPM_PER_VOLUME_FRACTION } from './units.ts';
 import { warn, type EngineWarning } from './warnings.ts';
 
@@ -45,17 +45,6 @@ function knownOutputModel(outdoor: number, sourceRate: number): SeparableExponen
   };
 }
 
-/** C(t) = C_ss + (C0 − C_ss)·e^(−λt): bases 1 and e^(−λt). */
-const RATE_AND_LEVEL_MODEL: SeparableExponentialModel = {
-  basisCount: 2,
-  fixed: () => [0, 0],
-  basis: (j, rate, t) => {
-    if (j === 0) return [1, 0];
-    const e = Math.exp(-rate * t);
-    return [e, -t * e];
-  },
-};
-
 function prepared(readings: readonly Reading[]): { t: number[]; raw: number[]; span: number; step: number } {
   const sorted = [...readings].sort((a, b) => a.time_s - b.time_s);
   const t0 = sorted[0]?.time_s ?? 0;
@@ -73,17 +62,14 @@ function result<C>(
   warnings: EngineWarning[],
   details: Record<string, number | null>,
 ): SupplyEstimate<C> {
-  const ok = figures !== null && figures.supply_m3s.value !== null;
-  const { failedShare = 1, ...rest } = figures ?? {};
-  return {
-    ...(ok ? (rest as typeof NO_FIGURES) : NO_FIGURES),
+  return toSupplyEstimate(figures ?? { ...NO_FIGURES, failedShare: 1 }, {
     method,
-    kind: ok ? 'estimate' : 'none',
     conditions: input.conditions,
     warnings,
-    assumed: { ...input.uncertainty, confidence: 0.95, interval: { kind: 'linearised', failedShare } },
+    uncertainty: input.uncertainty,
+    interval: { kind: 'linearised' },
     details,
-  };
+  });
 }
 
 function commonWarnings(u: UncertaintyInputs, n: number, minimum: number): EngineWarning[] {
@@ -142,7 +128,7 @@ export function fitBuildUpRateAndLevel<C>(input: BuildUpInput<C>): SupplyEstimat
   const warnings = commonWarnings(u, t.length, 5);
   if (t.length < 5 || !(span > 0)) return result('build-up-rate-and-level', input, null, warnings, {});
   const fitFor = (x: TrueInputs, startRate?: number) =>
-    fitSeparableExponential(RATE_AND_LEVEL_MODEL, t, raw.map((r) => trueLevel(x, r)), 1e-3 / span, 5 / step, startRate);
+    fitSeparableExponential(EXPONENTIAL_APPROACH_MODEL, t, raw.map((r) => trueLevel(x, r)), 1e-3 / span, 5 / step, startRate);
   const nominalInputsValue = nominalInputs(u, 0);
   const nominal = fitFor(nominalInputsValue);
   if (!nominal) return result('build-up-rate-and-level', input, null, warnings, {});

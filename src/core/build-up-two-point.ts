@@ -11,7 +11,7 @@
 import { levelAfter } from './balance.ts';
 import { findRootInBracket } from './bracketed-root.ts';
 import { monteCarloFigures, nominalInputs, trueLevel, type TrueInputs } from './supply-uncertainty.ts';
-import { NO_FIGURES, type Reading, type SupplyEstimate, type SupplyMethod, type UncertaintyInputs } from './supply-estimate.ts';
+import { NO_FIGURES, toSupplyEstimate, type Reading, type SupplyEstimate, type SupplyMethod, type UncertaintyInputs } from './supply-estimate.ts';
 import { PPM_PER_VOLUME_FRACTION } from './units.ts';
 import { warn, type EngineWarning } from './warnings.ts';
 
@@ -102,8 +102,7 @@ function solve<C>(
     },
     { draws, seed, statDof: 0, noiseSd_ppm: noiseSd },
   );
-  const { failedShare, ...rest } = figures;
-  if (failedShare > 0.025) {
+  if (figures.failedShare > 0.025) {
     warnings.push(
       warn(
         'not-steady',
@@ -111,15 +110,7 @@ function solve<C>(
       ),
     );
   }
-  return {
-    ...rest,
-    method,
-    kind: rest.supply_m3s.value === null ? 'none' : 'estimate',
-    conditions,
-    warnings,
-    assumed: { ...assumed, interval: { ...assumed.interval, failedShare } },
-    details: { duration_s: duration },
-  };
+  return toSupplyEstimate(figures, { method, conditions, warnings, uncertainty: u, interval: assumed.interval, details: { duration_s: duration } });
 }
 
 /**

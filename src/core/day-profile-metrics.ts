@@ -8,6 +8,7 @@
  */
 import { levelAfter, timeToReach } from './balance.ts';
 import { levelIntegralTo, type DayProfile } from './day-profile.ts';
+import { minimizeByGoldenSection } from './golden-section.ts';
 import { warn, type EngineWarning } from './warnings.ts';
 
 /** Which part of the day the figures describe. */
@@ -53,8 +54,6 @@ function spansOf(profile: DayProfile, period: MetricPeriod): [number, number][] 
   return spans;
 }
 
-const GOLDEN = (Math.sqrt(5) - 1) / 2;
-
 /** Highest window mean in [a, b] for a window of w (b − a ≥ w): scan then golden refinement. */
 function highestWindowMean(profile: DayProfile, a: number, b: number, w: number): [number, number] {
   const mean = (s: number): number => (levelIntegralTo(profile, s + w) - levelIntegralTo(profile, s)) / w;
@@ -71,28 +70,7 @@ function highestWindowMean(profile: DayProfile, a: number, b: number, w: number)
       bestS = s;
     }
   }
-  let lo = Math.max(a, bestS - step);
-  let hi = Math.min(last, bestS + step);
-  let x1 = hi - GOLDEN * (hi - lo);
-  let x2 = lo + GOLDEN * (hi - lo);
-  let f1 = mean(x1);
-  let f2 = mean(x2);
-  while (hi - lo > 1e-3) {
-    if (f1 > f2) {
-      hi = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = hi - GOLDEN * (hi - lo);
-      f1 = mean(x1);
-    } else {
-      lo = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = lo + GOLDEN * (hi - lo);
-      f2 = mean(x2);
-    }
-  }
-  const refined = 0.5 * (lo + hi);
+  const refined = minimizeByGoldenSection((s) => -mean(s), Math.max(a, bestS - step), Math.min(last, bestS + step), 1e-3);
   const refinedMean = mean(refined);
   return refinedMean > best ? [refinedMean, refined] : [best, bestS];
 }

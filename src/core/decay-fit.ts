@@ -8,12 +8,12 @@
  * offset, gain and noise, the outdoor level, the volume and the regression's own t-distributed
  * error, reusing the regression sums for each draw.
  */
-import { fitSeparableExponential, type SeparableExponentialModel } from './exponential-fit.ts';
+import { EXPONENTIAL_APPROACH_MODEL, fitSeparableExponential } from './exponential-fit.ts';
 import { logCurvature } from './log-curvature.ts';
 import { correctedLevel } from './meter-error.ts';
 import { fitStraightLine, slopeOnSameX } from './straight-line-fit.ts';
 import { monteCarloFigures, nominalInputs, type SupplyEvaluator } from './supply-uncertainty.ts';
-import { NO_FIGURES, type Reading, type SupplyEstimate, type UncertaintyInputs } from './supply-estimate.ts';
+import { NO_FIGURES, toSupplyEstimate, type Reading, type SupplyEstimate, type UncertaintyInputs } from './supply-estimate.ts';
 import { estimateDecayTwoPoint } from './decay-two-point.ts';
 import { warn, type EngineWarning } from './warnings.ts';
 
@@ -32,17 +32,6 @@ export interface DecayInput<C> {
 
 /** Background this far above outdoor (ppm) is flagged (practice.md §1.2: ~75 ppm). */
 export const BACKGROUND_FLAG_PPM = 75;
-
-/** C = B + A·e^(−λt): bases 1 and e^(−λt), nothing fixed. */
-const BACKGROUND_MODEL: SeparableExponentialModel = {
-  basisCount: 2,
-  fixed: () => [0, 0],
-  basis: (j, rate, t) => {
-    if (j === 0) return [1, 0];
-    const e = Math.exp(-rate * t);
-    return [e, -t * e];
-  },
-};
 
 /**
  * Fit a decay. Two readings: the two-point form (estimateDecayTwoPoint). Fewer: no estimate.
@@ -118,7 +107,7 @@ export function fitDecay<C>(input: DecayInput<C>): SupplyEstimate<C> {
   let evaluate: SupplyEvaluator;
   let statDof = fit.dof;
   if (rate * span >= 2 && usable.length >= 6) {
-    const bg = fitSeparableExponential(BACKGROUND_MODEL, t, trueLevels, 0.2 / span, 50 / span);
+    const bg = fitSeparableExponential(EXPONENTIAL_APPROACH_MODEL, t, trueLevels, 0.2 / span, 50 / span);
     if (bg && !bg.atSearchLimit && Number.isFinite(bg.rateSe)) {
       const background = bg.coefficients[0]!;
       details.background_ppm = background;
@@ -151,16 +140,7 @@ export function fitDecay<C>(input: DecayInput<C>): SupplyEstimate<C> {
     );
   }
   const figures = monteCarloFigures(u, evaluate, { draws, seed: input.seed, statDof, noiseSd_ppm: [] });
-  const { failedShare, ...rest } = figures;
-  return {
-    ...rest,
-    method,
-    kind: rest.supply_m3s.value === null ? 'none' : 'estimate',
-    conditions,
-    warnings,
-    assumed: { ...assumed, interval: { ...assumed.interval, failedShare } },
-    details,
-  };
+  return toSupplyEstimate(figures, { method, conditions, warnings, uncertainty: u, interval: assumed.interval, details });
 }
 
 /**

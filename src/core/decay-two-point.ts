@@ -4,7 +4,7 @@
  * readings, the meter's offset and gain, the outdoor level and the volume.
  */
 import { monteCarloFigures, nominalInputs, trueLevel } from './supply-uncertainty.ts';
-import { NO_FIGURES, type Reading, type SupplyEstimate, type UncertaintyInputs } from './supply-estimate.ts';
+import { NO_FIGURES, toSupplyEstimate, type Reading, type SupplyEstimate, type UncertaintyInputs } from './supply-estimate.ts';
 import { warn, type EngineWarning } from './warnings.ts';
 
 /** Input of a two-point decay. */
@@ -49,15 +49,13 @@ export function estimateDecayTwoPoint<C>(input: DecayTwoPointInput<C>): SupplyEs
   } else if (e2 / e1 > 0.8) {
     warnings.push(warn('short-decay', 'The level fell by less than a fifth of its excess: wait longer before the second reading.'));
   }
-  const { failedShare, ...rest } = figures;
-  const ok = e1 > e2 && e2 > 0 && rest.supply_m3s.value !== null;
-  return {
-    ...(ok ? rest : NO_FIGURES),
+  const ok = e1 > e2 && e2 > 0;
+  return toSupplyEstimate(ok ? figures : { ...NO_FIGURES, failedShare: figures.failedShare }, {
     method: 'decay-two-point',
-    kind: ok ? 'estimate' : 'none',
     conditions: input.conditions,
     warnings,
-    assumed: { ...u, confidence: 0.95, interval: { kind: 'monte-carlo', draws, seed: input.seed, failedShare } },
+    uncertainty: u,
+    interval: { kind: 'monte-carlo', draws, seed: input.seed },
     details: { excessRatio: e2 > 0 ? e2 / e1 : null },
-  };
+  });
 }

@@ -6,6 +6,7 @@
  * bracket the best λ, then Gauss–Newton steps on all parameters polish it and give the
  * covariance s²(JᵀJ)⁻¹ (Bates & Watts, Nonlinear Regression Analysis, 1988, §2.3).
  */
+import { minimizeByGoldenSection } from './golden-section.ts';
 import { invertMatrix, solveLinearSystem } from './linear-system.ts';
 
 /** A value and its derivative with respect to λ. */
@@ -90,7 +91,16 @@ function residualSumOfSquares(
   return rss;
 }
 
-const GOLDEN = (Math.sqrt(5) - 1) / 2;
+/** C(t) = B + A·e^(−λt) (a level approached exponentially): bases 1 and e^(−λt), nothing fixed. */
+export const EXPONENTIAL_APPROACH_MODEL: SeparableExponentialModel = {
+  basisCount: 2,
+  fixed: () => [0, 0],
+  basis: (j, rate, t) => {
+    if (j === 0) return [1, 0];
+    const e = Math.exp(-rate * t);
+    return [e, -t * e];
+  },
+};
 
 /**
  * Fit the model to (t, y) with λ searched in [rateMin, rateMax] (both > 0, 1/(unit of t)).
@@ -138,28 +148,9 @@ function searchRate(
     }
   }
   if (!Number.isFinite(bestValue)) return null;
-  let a = lnMin + ((lnMax - lnMin) * Math.max(0, best - 1)) / steps;
-  let b = lnMin + ((lnMax - lnMin) * Math.min(steps, best + 1)) / steps;
-  let x1 = b - GOLDEN * (b - a);
-  let x2 = a + GOLDEN * (b - a);
-  let f1 = profile(x1);
-  let f2 = profile(x2);
-  while (b - a > 1e-3) {
-    if (f1 < f2) {
-      b = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = b - GOLDEN * (b - a);
-      f1 = profile(x1);
-    } else {
-      a = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = a + GOLDEN * (b - a);
-      f2 = profile(x2);
-    }
-  }
-  return { rate: Math.exp(0.5 * (a + b)), atSearchLimit: best === 0 || best === steps };
+  const a = lnMin + ((lnMax - lnMin) * Math.max(0, best - 1)) / steps;
+  const b = lnMin + ((lnMax - lnMin) * Math.min(steps, best + 1)) / steps;
+  return { rate: Math.exp(minimizeByGoldenSection(profile, a, b, 1e-3)), atSearchLimit: best === 0 || best === steps };
 }
 
 /** Gauss–Newton on [λ, c…] from a starting λ, and the covariance at the end. */

@@ -98,3 +98,32 @@ export const NO_FIGURES: SupplyFigures = {
   supplyPerPerson_m3s: NO_FIGURE,
   steadyLevel_ppm: NO_FIGURE,
 };
+
+/**
+ * Assemble a method's result from propagated figures: kind 'estimate' when a supply came out,
+ * otherwise 'none' with empty figures; the interval method records the share of failed draws.
+ * Example: toSupplyEstimate({ …NO_FIGURES, failedShare: 1 }, …).kind = 'none'.
+ */
+export function toSupplyEstimate<C>(
+  figures: SupplyFigures & { failedShare: number },
+  parts: {
+    method: SupplyMethod;
+    conditions: C;
+    warnings: EngineWarning[];
+    uncertainty: UncertaintyInputs;
+    interval: IntervalMethod;
+    details: Record<string, number | null>;
+  },
+): SupplyEstimate<C> {
+  const { failedShare, ...rest } = figures;
+  const ok = rest.supply_m3s.value !== null;
+  return {
+    ...(ok ? rest : NO_FIGURES),
+    method: parts.method,
+    kind: ok ? 'estimate' : 'none',
+    conditions: parts.conditions,
+    warnings: parts.warnings,
+    assumed: { ...parts.uncertainty, confidence: 0.95, interval: { ...parts.interval, failedShare } },
+    details: parts.details,
+  };
+}
