@@ -52,8 +52,8 @@ export interface SideBySidePair {
  * referenceSd_ppm (one sd). Fits meter = gain·reference + offset by least squares when the
  * check spans at least 300 ppm; otherwise (the usual co-location at room level) estimates the
  * offset only and keeps the stated gain uncertainty `fallback.gainSd`. Noise: residual sd.
- * Example: pairs at (420, 452) (800, 843) (1200, 1235) with reference sd 10 → offset ≈ 33 ppm,
- * gain ≈ 1.002.
+ * Example: pairs at (420, 452) (800, 843) (1200, 1235) with reference sd 10 → offset 33.7 ppm,
+ * gain 1.0036.
  */
 export function meterErrorFromSideBySide(
   pairs: readonly SideBySidePair[],

@@ -36,16 +36,22 @@ function steadySupply(x: TrueInputs, level: number): number | null {
   return excess > 0 ? (PPM_PER_VOLUME_FRACTION * x.count * x.perPerson_m3s) / excess : null;
 }
 
+/**
+ * Lowest supply consistent with the reading: the room started at outdoor level. If even a sealed
+ * room could not rise that far in the time, the start was above outdoor and no supply is ruled
+ * out: 0.
+ */
 function lowestSupply(x: TrueInputs, level: number, duration: number): number | null {
   const q = supplyBetweenLevels(x, x.outdoor_ppm, level, duration);
-  return typeof q === 'number' ? q : null;
+  return typeof q === 'number' ? q : q === 'above-sealed' ? 0 : null;
 }
 
 /**
  * Near-steady estimate: an estimate when even the lowest consistent supply gives three time
  * constants of occupancy; otherwise an upper bound (rising history) or an open range (unknown).
  * Example: §7.2 classroom, 1316 ppm after 3 hours of the same 31 people, rising → estimate
- * ≈ 0.1 m³/s; the same reading after 20 minutes → upper bound 0.1 m³/s, range down to ≈ 0.02.
+ * ≈ 0.1 m³/s; the same reading after 20 minutes → upper bound 0.1 m³/s, range down to 0 (a
+ * sealed room starting at outdoor level could not have reached 1316 ppm in 20 minutes).
  */
 export function estimateNearSteady<C>(input: NearSteadyInput<C>): SupplyEstimate<C> {
   const u = input.uncertainty;

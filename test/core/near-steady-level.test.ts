@@ -32,3 +32,13 @@ describe('estimateNearSteady (practice.md §1.8)', () => {
     expect(r.warnings.map((w) => w.code)).toContain('history-unknown');
   });
 });
+
+describe('estimateNearSteady: a reading no start at outdoor could reach', () => {
+  it('gives a lower limit of zero, not a gap', () => {
+    // 1316 ppm after 20 min: a sealed room from 420 ppm reaches only 420 + 0.5926 ppm/s × 1200 s = 1131 ppm.
+    const r = estimateNearSteady({ ...base, reading: { time_s: 1200, level_ppm: 1316 }, occupiedSince_s: 0, history: 'rising-at-constant-occupancy' });
+    expect(r.kind).toBe('upper-bound');
+    expect(r.supply_m3s.low).toBe(0);
+    approxEqual(r.supply_m3s.value!, 0.1, { rel: 1e-6 });
+  });
+});
