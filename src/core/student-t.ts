@@ -90,6 +90,18 @@ export function studentTDensity(t: number, dof: number): number {
 export function studentTQuantile(p: number, dof: number): number {
   if (p === 0.5) return 0;
   if (p < 0.5) return -studentTQuantile(1 - p, dof);
+  const key = `${p}:${dof}`;
+  const known = quantileCache.get(key);
+  if (known !== undefined) return known;
+  const value = solveQuantile(p, dof);
+  if (quantileCache.size < 1000) quantileCache.set(key, value);
+  return value;
+}
+
+/** Quantiles already found (a pure function of its arguments, so remembering them is safe). */
+const quantileCache = new Map<string, number>();
+
+function solveQuantile(p: number, dof: number): number {
   let lo = 0;
   let hi = 1;
   while (studentTCdf(hi, dof) < p) {
