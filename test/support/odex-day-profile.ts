@@ -3,11 +3,12 @@
  * integrated numerically by odex 2.0.4 (Hairer & Wanner's ODEX, Gragg–Bulirsch–Stoer
  * extrapolation), restarted at each change of conditions. Used by tests and benchmarks.
  */
-import odex from 'odex';
+import { createRequire } from 'node:module';
 import type { DayProfile } from '../../src/core/day-profile.ts';
 import { sourceRate, airChangeRate } from '../../src/core/balance.ts';
 
-const { Solver } = odex as unknown as { Solver: new (n: number) => OdexSolver };
+// Loaded with require: odex ships its TypeScript source, which fails our strict type check.
+const { Solver } = createRequire(import.meta.url)('odex') as { Solver: new (n: number) => OdexSolver };
 interface OdexSolver {
   absoluteTolerance: number;
   relativeTolerance: number;

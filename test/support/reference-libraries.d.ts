@@ -1,8 +1,7 @@
 /**
- * Reference libraries used only by tests ship no usable type declarations (odex ships its
- * TypeScript source, which does not pass our strict settings; tsconfig.json maps it here).
+ * Reference libraries used only by tests ship no usable type declarations (odex, which
+ * ships TypeScript source that fails our strict settings, is loaded with require instead).
  * Tests describe the part of each API they use with a local interface where they import it.
  */
 declare module 'jstat';
-declare module 'odex';
 declare module 'psychrolib';
