@@ -6,7 +6,10 @@
  * Directions are compass bearings in degrees clockwise from north, of the way the opening faces
  * (a window in a south wall faces 180). Heights are above the room's floor unless stated.
  */
+import type { AssumedLeakageBasis } from './assumed-air-permeability.ts';
 import type { AreaBasis } from './equivalent-area.ts';
+import type { LblShelterClass, LblStoreys } from './lbl-infiltration.ts';
+import type { TerrainKind } from './reference-wind-speed.ts';
 
 /** How a window opens. Sliding sashes open by a stroke; hinged sashes by an angle or a stroke. */
 export type WindowType = 'side-hung' | 'top-hung' | 'bottom-hung' | 'vertical-sliding' | 'horizontal-sliding';
@@ -113,4 +116,64 @@ export interface FanInput {
   measuredFlow_m3s?: number;
   /** Maker's rated flow, m³/s. Used, derated, only when no measurement exists. */
   ratedFlow_m3s?: number;
+}
+
+/** Where the leakage figure comes from. */
+export type LeakageSource =
+  /** Air permeability from a pressure test, m³/(h·m²) of envelope at 50 Pa. */
+  | { basis: 'measured-air-permeability'; q50_m3hm2: number }
+  /** The dwelling's effective leakage area at 4 Pa (C_D = 1 convention), m², and its envelope area, m². */
+  | { basis: 'effective-leakage-area'; dwellingLeakageArea_m2: number; dwellingEnvelope_m2: number }
+  /** No test: a default from construction or age, clearly assumed. */
+  | { basis: 'assumed'; assumed: AssumedLeakageBasis };
+
+/** Background leakage of the room's share of the envelope. */
+export interface LeakageInput {
+  id: string;
+  source: LeakageSource;
+  /** Outside walls, roof and exposed floor of this room, m². Zero for an interior room. */
+  roomExposedEnvelope_m2: number;
+  /** Storeys of the dwelling or building (LBL coefficients). */
+  storeys: LblStoreys;
+  /** LBL shelter class 1 (no obstructions) to 5 (buildings immediately adjacent). */
+  shelterClass: LblShelterClass;
+  /** Sides of the dwelling sheltered by neighbours or obstructions, 0–4 (SAP shelter factor). */
+  shelteredSides: number;
+  /** A flat or terraced house whose test also measured leakage to neighbours. */
+  includesLeakageToNeighbours?: boolean;
+}
+
+/**
+ * A path for cross ventilation through other rooms: openings on another facade reached through
+ * internal doors. Used only when every door on the path was recorded open.
+ */
+export interface CrossPathInput {
+  internalPathOpen: boolean;
+  /** Open area of the far openings, m² (free area, as for windows). */
+  farOpenArea_m2: number;
+  farFacing_deg: number;
+  /** Smallest open internal doorway on the path, m² (in series with the openings). */
+  internalOpeningArea_m2: number;
+}
+
+/** The site, for the wind at the building. */
+export interface SiteInput {
+  terrain: TerrainKind;
+  /** Height of the building (or of the room's openings above ground), m. */
+  buildingHeight_m: number;
+}
+
+/** Everything needed to predict one room's air supply under a weather case. */
+export interface RoomAirflowInput {
+  id: string;
+  /** Floor-to-ceiling height, m (depth limits, stack height of envelope vents). */
+  ceilingHeight_m: number;
+  /** Depth of the room away from its openings, m; omitted if not recorded. */
+  depth_m?: number;
+  openings: OpeningInput[];
+  fans: FanInput[];
+  /** Omitted when the room's leakage is not to be counted (e.g. entered separately). */
+  leakage?: LeakageInput;
+  crossPath?: CrossPathInput;
+  site: SiteInput;
 }
