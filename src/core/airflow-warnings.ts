@@ -32,6 +32,7 @@ export type AirflowWarningCode =
   | 'beyond-cross-depth'
   | 'cross-path-closed'
   | 'cross-pressure-assumed'
+  | 'cross-through-other-rooms'
   | 'leakage-assumed'
   | 'leakage-interior-room'
   | 'leakage-includes-neighbours'

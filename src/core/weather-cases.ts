@@ -50,11 +50,14 @@ export const MILD_CALM: WeatherCase = Object.freeze({
   assumed: true,
 });
 
+/** A non-empty list of weather cases. */
+export type WeatherCases = readonly [WeatherCase, ...WeatherCase[]];
+
 /**
  * The screening cases every room prediction is evaluated over.
  * Example: SCREENING_WEATHER_CASES.map((c) => c.id) = ['cold-calm', 'cold-windy', 'mild-calm'].
  */
-export const SCREENING_WEATHER_CASES: readonly WeatherCase[] = Object.freeze([COLD_CALM, COLD_WINDY, MILD_CALM]);
+export const SCREENING_WEATHER_CASES: WeatherCases = Object.freeze([COLD_CALM, COLD_WINDY, MILD_CALM] as const);
 
 /**
  * Inside-outside temperature difference of a case, K (absolute value).
