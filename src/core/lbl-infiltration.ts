@@ -9,6 +9,7 @@
  * in m/s. The engine takes and returns SI (m², m³/s); the coefficients keep their published units.
  */
 import { AIR_DENSITY_KG_M3 } from './air-constants.ts';
+import { orificeFlow } from './orifice-flow.ts';
 import { fromCubicMetresPerHour, fromLitresPerSecond } from './units.ts';
 
 /** Storeys for which the LBL coefficients are tabulated (taller buildings: use 3). */
@@ -59,7 +60,8 @@ export const ENVELOPE_FLOW_EXPONENT = 0.65;
 
 /**
  * Effective leakage area at 4 Pa (m², C_D = 1) of envelope area envelope_m2 (m²) with air
- * permeability q50 (m³/(h·m²) at 50 Pa): Q_4 = Q_50·(4/50)^n, A_L = Q_4·sqrt(ρ/(2·4 Pa)).
+ * permeability q50 (m³/(h·m²) at 50 Pa): Q_4 = Q_50·(4/50)^n, then A_L is the orifice of C_D = 1
+ * passing Q_4 at 4 Pa, A_L = Q_4·sqrt(ρ/(2·4 Pa)).
  * Source: the standard extrapolation to 4 Pa (from memory; references.md §4.3).
  * Example: leakageAreaFromAirPermeability(10, 250) = 0.05208 m² (520.8 cm²).
  */
@@ -71,5 +73,5 @@ export function leakageAreaFromAirPermeability(
 ): number {
   const q50 = fromCubicMetresPerHour(Math.max(0, q50_m3hm2) * Math.max(0, envelope_m2));
   const q4 = q50 * (4 / 50) ** exponent;
-  return q4 * Math.sqrt(density_kgm3 / (2 * 4));
+  return q4 / orificeFlow(1, 4, 1, density_kgm3);
 }

@@ -2,25 +2,14 @@ import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { approxEqual } from '../support/approx-equal.ts';
 import { backgroundVentFlow, labelledVentFlow } from '../../src/core/background-vent-flow.ts';
-import type { BackgroundVentInput } from '../../src/core/airflow-inputs.ts';
 import { litresPerSecond } from '../../src/core/units.ts';
-
-const vent = (over: Partial<BackgroundVentInput> = {}): BackgroundVentInput => ({
-  kind: 'background-vent',
-  id: 'bedroom-2-vent',
-  labelArea_m2: 0.008,
-  areaBasis: 'equivalent',
-  condition: 'open',
-  facing_deg: 180,
-  centreHeight_m: 2.1,
-  ...over,
-});
+import { exampleVent } from '../support/airflow-examples.ts';
 
 describe('backgroundVentFlow (src/core/background-vent-flow.ts)', () => {
   it('8000 mm² equivalent area at 1 Pa gives 6.30 L/s, ±50 %', () => {
     // derived (our computation from the orifice equation, BS 5925:1991 cl. 9 eq. (2)): references.md §3.1 table [D];
     // practice.md §5 quotes ≈6 L/s (common practice (no published source)).
-    const item = backgroundVentFlow(vent(), 1);
+    const item = backgroundVentFlow(exampleVent(), 1);
     approxEqual(litresPerSecond(item.flow.central), 6.3, { abs: 0.005 });
     approxEqual(litresPerSecond(item.flow.low), 3.15, { abs: 0.005 });
     approxEqual(litresPerSecond(item.flow.high), 9.45, { abs: 0.005 });
@@ -31,15 +20,15 @@ describe('backgroundVentFlow (src/core/background-vent-flow.ts)', () => {
   });
 
   it('a free-area label passes less than the same equivalent area and is flagged', () => {
-    const free = backgroundVentFlow(vent({ areaBasis: 'free' }), 1);
-    expect(free.flow.central).toBeLessThan(backgroundVentFlow(vent(), 1).flow.central);
+    const free = backgroundVentFlow(exampleVent({ areaBasis: 'free' }), 1);
+    expect(free.flow.central).toBeLessThan(backgroundVentFlow(exampleVent(), 1).flow.central);
     expect(free.warnings.map((w) => w.code)).toContain('free-area-label');
   });
 
   it('closed and blocked vents pass nothing and say why', () => {
-    expect(backgroundVentFlow(vent({ condition: 'closed' }), 4).flow.high).toBe(0);
-    expect(backgroundVentFlow(vent({ condition: 'closed' }), 4).warnings[0]?.code).toBe('vent-closed');
-    expect(backgroundVentFlow(vent({ condition: 'blocked' }), 4).warnings[0]?.code).toBe('vent-blocked');
+    expect(backgroundVentFlow(exampleVent({ condition: 'closed' }), 4).flow.high).toBe(0);
+    expect(backgroundVentFlow(exampleVent({ condition: 'closed' }), 4).warnings[0]?.code).toBe('vent-closed');
+    expect(backgroundVentFlow(exampleVent({ condition: 'blocked' }), 4).warnings[0]?.code).toBe('vent-blocked');
   });
 
   it('property: more area never gives less air; low ≤ central ≤ high; never NaN', () => {

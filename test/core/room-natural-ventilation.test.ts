@@ -6,34 +6,11 @@ import { bearingDifference, roomNaturalVentilation } from '../../src/core/room-n
 import { singleSidedFlow } from '../../src/core/single-sided-ventilation.ts';
 import { referenceWindSpeed } from '../../src/core/reference-wind-speed.ts';
 import { COLD_CALM, COLD_WINDY, SCREENING_WEATHER_CASES } from '../../src/core/weather-cases.ts';
-import type { RoomAirflowInput, WindowInput } from '../../src/core/airflow-inputs.ts';
-
-const sash = (over: Partial<WindowInput> = {}): WindowInput => ({
-  kind: 'window',
-  id: 'south-sash',
-  windowType: 'side-hung',
-  sashWidth_m: 0.6,
-  sashHeight_m: 1.0,
-  opening: { by: 'angle', angle_deg: 30 },
-  condition: 'works',
-  facing_deg: 180,
-  centreHeight_m: 1.5,
-  ...over,
-});
-
-const room = (over: Partial<RoomAirflowInput> = {}): RoomAirflowInput => ({
-  id: 'flat-3-living',
-  ceilingHeight_m: 2.4,
-  depth_m: 4,
-  openings: [sash()],
-  fans: [],
-  site: { terrain: 'urban', buildingHeight_m: 6 },
-  ...over,
-});
+import { exampleRoom, exampleWindow } from '../support/airflow-examples.ts';
 
 describe('roomNaturalVentilation (src/core/room-natural-ventilation.ts)', () => {
   it('one sash is single-sided by BS 5925, its range covering de Gids & Phaff and ±50 %', () => {
-    const r = roomNaturalVentilation(room(), COLD_CALM);
+    const r = roomNaturalVentilation(exampleRoom(), COLD_CALM);
     expect(r.mode).toBe('single-sided');
     const item = r.items[0]!;
     const bs = singleSidedFlow(
@@ -50,17 +27,17 @@ describe('roomNaturalVentilation (src/core/room-natural-ventilation.ts)', () => 
   });
 
   it('windows on two facades of the room ventilate across it', () => {
-    const r = roomNaturalVentilation(room({ openings: [sash(), sash({ id: 'north-sash', facing_deg: 0 })] }), COLD_WINDY);
+    const r = roomNaturalVentilation(exampleRoom({ openings: [exampleWindow(), exampleWindow({ id: 'north-sash', facing_deg: 0 })] }), COLD_WINDY);
     expect(r.mode).toBe('cross');
     expect(r.warnings.map((w) => w.code)).toContain('cross-pressure-assumed');
-    const single = roomNaturalVentilation(room({ openings: [sash(), sash({ id: 'b', facing_deg: 200 })] }), COLD_WINDY);
+    const single = roomNaturalVentilation(exampleRoom({ openings: [exampleWindow(), exampleWindow({ id: 'b', facing_deg: 200 })] }), COLD_WINDY);
     expect(single.mode).toBe('single-sided');
   });
 
   it('a path through other rooms counts only with its doors open, and its low end stays single-sided', () => {
     const path = { internalPathOpen: true, farOpenArea_m2: 0.4, farFacing_deg: 0, internalOpeningArea_m2: 1.6 };
-    const open = roomNaturalVentilation(room({ crossPath: path }), COLD_WINDY);
-    const shut = roomNaturalVentilation(room({ crossPath: { ...path, internalPathOpen: false } }), COLD_WINDY);
+    const open = roomNaturalVentilation(exampleRoom({ crossPath: path }), COLD_WINDY);
+    const shut = roomNaturalVentilation(exampleRoom({ crossPath: { ...path, internalPathOpen: false } }), COLD_WINDY);
     expect(open.mode).toBe('cross');
     expect(open.warnings.map((w) => w.code)).toContain('cross-through-other-rooms');
     expect(shut.mode).toBe('single-sided');
@@ -70,13 +47,13 @@ describe('roomNaturalVentilation (src/core/room-natural-ventilation.ts)', () => 
   });
 
   it('warns when the room is deeper than its ventilation reaches (CIBSE AM10, from memory)', () => {
-    const r = roomNaturalVentilation(room({ depth_m: 7 }), COLD_CALM);
+    const r = roomNaturalVentilation(exampleRoom({ depth_m: 7 }), COLD_CALM);
     expect(r.warnings.map((w) => w.code)).toContain('beyond-single-sided-depth');
   });
 
   it('vents use the envelope pressure; undercuts are capacity only', () => {
     const r = roomNaturalVentilation(
-      room({
+      exampleRoom({
         openings: [
           { kind: 'background-vent', id: 'v', labelArea_m2: 0.008, areaBasis: 'equivalent', condition: 'open', facing_deg: 180, centreHeight_m: 2.1 },
           { kind: 'door-undercut', id: 'd', doorWidth_m: 0.76, gap_m: 0.01 },
@@ -105,7 +82,7 @@ describe('roomNaturalVentilation (src/core/room-natural-ventilation.ts)', () => 
           // All the room's own windows face one way; only the shut path could make it cross.
           const oneWay = windows.map((w) => ({ ...w, facing_deg: 90 }));
           const r = roomNaturalVentilation(
-            room({ openings: oneWay, crossPath: { internalPathOpen: false, farOpenArea_m2: far, farFacing_deg: 270, internalOpeningArea_m2: 1.8 } }),
+            exampleRoom({ openings: oneWay, crossPath: { internalPathOpen: false, farOpenArea_m2: far, farFacing_deg: 270, internalOpeningArea_m2: 1.8 } }),
             weather,
           );
           expect(r.mode).not.toBe('cross');

@@ -2,45 +2,25 @@ import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { approxEqual } from '../support/approx-equal.ts';
 import { roomArb } from '../support/airflow-arbitraries.ts';
+import { exampleRoom, exampleVent, exampleWindow } from '../support/airflow-examples.ts';
 import { predictRoomSupply, predictRoomSupplyOverCases } from '../../src/core/room-supply-prediction.ts';
 import { orificeFlow } from '../../src/core/orifice-flow.ts';
 import { combineFlows } from '../../src/core/outdoor-air-combination.ts';
 import { COLD_CALM, MILD_CALM, SCREENING_WEATHER_CASES } from '../../src/core/weather-cases.ts';
 import type { OpeningInput, RoomAirflowInput } from '../../src/core/airflow-inputs.ts';
 
-const trickleVent: OpeningInput = {
-  kind: 'background-vent',
-  id: 'bed-vent',
-  labelArea_m2: 0.008,
-  areaBasis: 'equivalent',
-  condition: 'open',
-  facing_deg: 180,
-  centreHeight_m: 2.1,
-};
-
-const bedroom = (over: Partial<RoomAirflowInput> = {}): RoomAirflowInput => ({
-  id: 'flat-7-bedroom-2',
-  ceilingHeight_m: 2.4,
-  depth_m: 3.5,
-  openings: [
-    trickleVent,
-    {
-      kind: 'window',
-      id: 'bed-sash',
-      windowType: 'top-hung',
-      sashWidth_m: 0.6,
-      sashHeight_m: 0.5,
-      opening: { by: 'closed' },
-      condition: 'works',
-      facing_deg: 180,
-      centreHeight_m: 1.8,
-    },
-    { kind: 'door-undercut', id: 'bed-door', doorWidth_m: 0.76, gap_m: 0.008 },
-  ],
-  fans: [],
-  site: { terrain: 'urban', buildingHeight_m: 6 },
-  ...over,
-});
+/** A bedroom whose only outdoor opening in use is its trickle vent. */
+const bedroom = (over: Partial<RoomAirflowInput> = {}): RoomAirflowInput =>
+  exampleRoom({
+    id: 'flat-7-bedroom-2',
+    depth_m: 3.5,
+    openings: [
+      exampleVent(),
+      exampleWindow({ id: 'bed-sash', windowType: 'top-hung', sashHeight_m: 0.5, opening: { by: 'closed' }, centreHeight_m: 1.8 }),
+      { kind: 'door-undercut', id: 'bed-door', doorWidth_m: 0.76, gap_m: 0.008 },
+    ],
+    ...over,
+  });
 
 describe('predictRoomSupply (src/core/room-supply-prediction.ts)', () => {
   it('a bedroom with only a trickle vent gets the vent’s orifice flow; the undercut is not added', () => {
