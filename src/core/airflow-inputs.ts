@@ -94,9 +94,6 @@ export type OpeningInput =
   | DoorUndercutInput
   | TransferGrilleInput;
 
-/** Openings to outdoors (everything but internal transfer). */
-export type OutdoorOpeningInput = WindowInput | BackgroundVentInput | AirBrickInput;
-
 /**
  * Which system a fan belongs to: a room's own fan, or a terminal of a whole-dwelling system
  * (extract-only MEV, supply-only PIV, or balanced supply and extract such as MVHR).

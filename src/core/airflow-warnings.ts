@@ -47,6 +47,7 @@ export interface AirflowWarning {
 
 /**
  * Build a warning.
+ * Source: none (a plain constructor; the codes and messages are ours).
  * Example: airflowWarning('vent-closed', 'The vent was closed.') = { code: 'vent-closed', message: 'The vent was closed.' }.
  */
 export function airflowWarning(code: AirflowWarningCode, message: string): AirflowWarning {

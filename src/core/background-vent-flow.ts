@@ -33,7 +33,11 @@ export function labelledVentFlow(
   return { flow, equivalentArea_m2: area.central, warnings };
 }
 
-/** "4000 mm² equivalent area at 1.0 Pa" for method strings. */
+/**
+ * Words for a method string: equivalent area (m², shown in mm² to 100) and pressure (Pa, to 0.01).
+ * Source: none (display wording).
+ * Example: describeOrifice(0.004, 1) = '4000 mm² equivalent area at 1 Pa'.
+ */
 export function describeOrifice(equivalentArea_m2: number, pressure_Pa: number): string {
   return `${roundToStep(squareMillimetres(equivalentArea_m2), 100)} mm² equivalent area at ${roundToStep(pressure_Pa, 0.01)} Pa`;
 }

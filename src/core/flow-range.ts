@@ -26,6 +26,7 @@ export const NO_FLOW: FlowRange = Object.freeze({ low: 0, central: 0, high: 0 })
 
 /**
  * central·(1 − rel) … central·(1 + rel), m³/s. rel is a fraction (0.5 = ±50 %), at most 1.
+ * Source: interval arithmetic on non-negative flows (no published method).
  * Example: rangeAboutCentral(0.1, 0.5) = { low: 0.05, central: 0.1, high: 0.15 }.
  */
 export function rangeAboutCentral(central_m3s: number, rel: number): FlowRange {
@@ -34,6 +35,7 @@ export function rangeAboutCentral(central_m3s: number, rel: number): FlowRange {
 
 /**
  * central/factor … central·factor, m³/s (factor ≥ 1).
+ * Source: interval arithmetic on non-negative flows (no published method).
  * Example: rangeByFactor(0.01, 2) = { low: 0.005, central: 0.01, high: 0.02 }.
  */
 export function rangeByFactor(central_m3s: number, factor: number): FlowRange {
@@ -43,6 +45,7 @@ export function rangeByFactor(central_m3s: number, factor: number): FlowRange {
 /**
  * Widen a range so that it also covers every value in `others` (m³/s), e.g. an alternative
  * published model evaluated in the same conditions.
+ * Source: interval arithmetic on non-negative flows (no published method).
  * Example: coverValues({ low: 1, central: 2, high: 3 }, [0.5, 4]) = { low: 0.5, central: 2, high: 4 }.
  */
 export function coverValues(range: FlowRange, others: readonly number[]): FlowRange {
@@ -55,6 +58,7 @@ export function coverValues(range: FlowRange, others: readonly number[]): FlowRa
 
 /**
  * Sum of ranges, end by end (m³/s).
+ * Source: interval arithmetic on non-negative flows (no published method).
  * Example: addRanges([{ low: 1, central: 2, high: 3 }, { low: 1, central: 1, high: 1 }]) = { low: 2, central: 3, high: 4 }.
  */
 export function addRanges(ranges: readonly FlowRange[]): FlowRange {
@@ -66,6 +70,7 @@ export function addRanges(ranges: readonly FlowRange[]): FlowRange {
 
 /**
  * Each end multiplied by a non-negative share.
+ * Source: interval arithmetic on non-negative flows (no published method).
  * Example: scaleRange({ low: 1, central: 2, high: 3 }, 0.5) = { low: 0.5, central: 1, high: 1.5 }.
  */
 export function scaleRange(range: FlowRange, share: number): FlowRange {

@@ -24,6 +24,7 @@ export interface HeightSplit {
 
 /**
  * Every division of the open areas between distinct centre heights (none if all at one height).
+ * Source: our application of the BS 5925 two-level stack forms (see the file note).
  * Example: heightSplits([{ area_m2: 0.2, centreHeight_m: 0.5 }, { area_m2: 0.2, centreHeight_m: 2.0 }])
  *   = [{ lowArea_m2: 0.2, highArea_m2: 0.2, separation_m: 1.5 }].
  */

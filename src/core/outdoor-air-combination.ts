@@ -33,6 +33,7 @@ export function combineFlows(supply_m3s: number, extract_m3s: number, natural_m3
 
 /**
  * The rule applied end by end to ranges (m³/s).
+ * Source: ASHRAE HoF superposition rule (from memory).
  * Example: combineRanges({ low: 0, central: 0, high: 0 }, { low: 0.005, central: 0.01, high: 0.015 },
  *   { low: 0.005, central: 0.01, high: 0.02 }) = { low: 0.00707, central: 0.01414, high: 0.025 }.
  */

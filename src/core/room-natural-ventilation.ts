@@ -57,6 +57,7 @@ export interface NaturalVentilation {
 
 /**
  * Smallest angle between two compass bearings, degrees (0–180).
+ * Source: plane geometry.
  * Example: bearingDifference(350, 20) = 30.
  */
 export function bearingDifference(a_deg: number, b_deg: number): number {

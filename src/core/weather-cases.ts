@@ -61,6 +61,7 @@ export const SCREENING_WEATHER_CASES: WeatherCases = Object.freeze([COLD_CALM, C
 
 /**
  * Inside-outside temperature difference of a case, K (absolute value).
+ * Source: the Δθ of the BS 5925 stack forms (references.md §3.2).
  * Example: temperatureDifference(COLD_CALM) = 20.
  */
 export function temperatureDifference(weather: WeatherCase): number {
@@ -69,6 +70,7 @@ export function temperatureDifference(weather: WeatherCase): number {
 
 /**
  * Mean of the inside and outside temperatures, °C (the θ̄ of the BS 5925 stack forms).
+ * Source: BS 5925 stack forms (references.md §3.2).
  * Example: meanTemperature(MILD_CALM) = 17.5.
  */
 export function meanTemperature(weather: WeatherCase): number {
