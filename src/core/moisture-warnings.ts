@@ -17,6 +17,7 @@ export type MoistureWarningCode =
   | 'factor-assumed'
   | 'surface-saturated'
   | 'no-supply'
+  | 'air-saturated'
   | 'buffering-ignored'
   | 'screening-case'
   | 'outdoor-above-indoor'
