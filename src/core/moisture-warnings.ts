@@ -31,7 +31,10 @@ export type MoistureWarningCode =
   | 'secondary-source'
   | 'edit-unknown-criterion'
   | 'edit-stale-value'
-  | 'new-work-guidance-as-benchmark';
+  | 'new-work-guidance-as-benchmark'
+  | 'ventilation-unknown'
+  | 'tenure-unknown'
+  | 'not-rescalable';
 
 /** One warning. */
 export interface MoistureWarning {
