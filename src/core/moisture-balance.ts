@@ -82,7 +82,7 @@ function prepare(c: MoistureBalanceConditions): Prepared {
   };
 }
 
-function describe(
+function resultFor(
   c: MoistureBalanceConditions,
   p: Prepared,
   ratio: number,
@@ -128,7 +128,7 @@ export function steadyIndoorHumidity(c: MoistureBalanceConditions): MoistureBala
       moistureWarning('no-supply', 'With no outdoor air the moisture released has nowhere to go: the room has no steady humidity.'),
     );
   } else ratio = p.outdoorRatio;
-  return describe(c, p, ratio, METHOD_STEADY, warnings);
+  return resultFor(c, p, ratio, METHOD_STEADY, warnings);
 }
 
 /**
@@ -154,5 +154,5 @@ export function indoorHumidityAfter(c: MoistureBalanceConditions, startRh_pct: n
       'Walls, furnishings and fabrics take up and give back moisture, so the room changes more slowly than this calculation shows.',
     ),
   ];
-  return describe(c, p, ratio, METHOD_TRANSIENT, warnings);
+  return resultFor(c, p, ratio, METHOD_TRANSIENT, warnings);
 }

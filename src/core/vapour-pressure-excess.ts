@@ -93,8 +93,9 @@ export function vapourPressureExcess(log: LoggedHumidity): VapourPressureExcessR
   const warnings: MoistureWarning[] = [];
   const n = log.insideTemp_C.length;
   const lengths = [log.insideRh_pct.length, log.outsideTemp_C.length, log.outsideRh_pct.length, dayCount(log.day)];
+  const paired = lengths.every((l) => l === n);
   const byDay = new Map<number, Sums>();
-  if (lengths.some((l) => l !== n)) {
+  if (!paired) {
     warnings.push(
       moistureWarning('unequal-series', 'The inside, outside and time columns have different lengths, so the readings cannot be paired.'),
     );
@@ -137,7 +138,7 @@ export function vapourPressureExcess(log: LoggedHumidity): VapourPressureExcessR
   const mean = (pick: (d: DailyExcess) => number) => (days.length ? days.reduce((a, d) => a + pick(d), 0) / days.length : 0);
   const meanExcess = mean((d) => d.excess_Pa);
   const meanOutside = mean((d) => d.outsideTemp_C);
-  if (days.length < MIN_DAYS_FOR_EXCESS && lengths.every((l) => l === n)) {
+  if (paired && days.length < MIN_DAYS_FOR_EXCESS) {
     warnings.push(
       moistureWarning('too-few-days', `Only ${days.length} day(s) of readings: one to two weeks of winter logging gives a fairer picture.`),
     );

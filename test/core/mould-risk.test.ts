@@ -7,6 +7,7 @@ import { surfaceCondensation } from '../../src/core/condensation-risk.ts';
 import { judgeMouldWithObservation } from '../../src/core/observed-mould.ts';
 import { constructionTemperatureFactor } from '../../src/core/construction-temperature-factors.ts';
 import type { TemperatureFactorEstimate } from '../../src/core/surface-temperature-factor.ts';
+import { steadyIndoorHumidity } from '../../src/core/moisture-balance.ts';
 
 const junction: TemperatureFactorEstimate = { value: 0.75, basis: 'measured', label: 'junction' };
 const base: MouldRiskInput = { insideTemp_C: 20, insideRh_pct: 60, outsideTemp_C: 5, factor: junction, basis: 'monthly-mean' };
@@ -76,6 +77,30 @@ describe('mould risk properties', () => {
         const rank = { 'no-risk-predicted': 0, 'not-established': 0, risk: 1 };
         return b.surfaceRh_pct >= a.surfaceRh_pct && rank[b.verdict] >= rank[a.verdict];
       }),
+    );
+  });
+
+  it('more moisture released in the room never lowers the surface RH (balance then mould check)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 5e-4, noNaN: true }),
+        fc.double({ min: 0, max: 5e-4, noNaN: true }),
+        fc.double({ min: 1e-3, max: 0.2, noNaN: true }),
+        fc.double({ min: -10, max: 12, noNaN: true }),
+        fc.double({ min: 0.2, max: 0.95, noNaN: true }),
+        (source, extra, supply, tOut, f) => {
+          const room = { volume_m3: 40, supply_m3s: supply, outdoorTemp_C: tOut, outdoorRh_pct: 85, roomTemp_C: 19 };
+          const surfaceRh = (g: number) =>
+            mouldRisk({
+              insideTemp_C: 19,
+              insideRh_pct: steadyIndoorHumidity({ ...room, source_kgs: g }).relativeHumidity_pct,
+              outsideTemp_C: tOut,
+              factor: { value: f, basis: 'measured', label: '' },
+              basis: 'monthly-mean',
+            }).surfaceRh_pct;
+          return surfaceRh(source + extra) >= surfaceRh(source);
+        },
+      ),
     );
   });
 

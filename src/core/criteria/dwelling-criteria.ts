@@ -16,10 +16,11 @@
 import { fromLitresPerSecond, fromSquareMillimetres, perSecond } from '../units.ts';
 import type { Criterion, CriterionConfidence, CriterionCoverage } from './criterion.ts';
 import { en16798Co2Bands } from './en-16798-bands.ts';
+import { legalDuty } from './legal-duty.ts';
 
 const ADF_V1 = { document: 'Approved Document F, Volume 1: dwellings', edition: '2021 (in force 15 June 2022)' };
 const NEW_WORK: CriterionCoverage = { buildingUses: ['dwelling'], roomUses: 'any', situations: ['new'], ventilation: 'any' };
-const EXISTING = ['existing', 'refurbished', 'new'] as const;
+const ALL_SITUATIONS = ['existing', 'refurbished', 'new'] as const;
 const HABITABLE = ['bedroom', 'living-room'] as const;
 
 function adfRow(
@@ -167,46 +168,31 @@ export const DWELLING_CRITERIA: readonly Criterion[] = [
     roomUses: ['bedroom', 'living-room', 'kitchen', 'wet-room', 'toilet', 'utility'],
     note: 'Never undercut or wedge fire doors (flat entrance doors).',
   }),
-  {
+  legalDuty({
     id: 'hhsrs-damp-mould',
     group: 'housing-hazard',
     title: 'Housing health and safety rating: damp and mould growth hazard',
     source: { document: 'Housing Act 2004 Part 1; Housing Health and Safety Rating System (England) Regulations 2005', edition: 'as amended' },
     confidence: 'secondary',
-    metric: 'qualitative-duty',
-    period: 'not-applicable',
-    status: 'law',
-    limit: null,
-    direction: 'none',
-    covers: { buildingUses: ['dwelling'], roomUses: 'any', situations: EXISTING, ventilation: 'any' },
+    covers: { buildingUses: ['dwelling'], roomUses: 'any', situations: ALL_SITUATIONS, ventilation: 'any' },
     note: 'A risk-based assessment of the hazard, with no CO2 or airflow number. Excess cold, carbon monoxide and radon are hazards of the same system.',
-  },
-  {
+  }),
+  legalDuty({
     id: 'fitness-for-habitation',
     group: 'fitness-for-habitation',
     title: 'Rented homes must be fit for human habitation (including ventilation, damp and mould)',
     source: { document: 'Homes (Fitness for Human Habitation) Act 2018', edition: '2018' },
     confidence: 'secondary',
-    metric: 'qualitative-duty',
-    period: 'not-applicable',
-    status: 'law',
-    limit: null,
-    direction: 'none',
-    covers: { buildingUses: ['dwelling'], roomUses: 'any', situations: EXISTING, ventilation: 'any', tenures: ['private-rented', 'social-rented'] },
-  },
-  {
+    covers: { buildingUses: ['dwelling'], roomUses: 'any', situations: ALL_SITUATIONS, ventilation: 'any', tenures: ['private-rented', 'social-rented'] },
+  }),
+  legalDuty({
     id: 'social-landlord-damp-mould-timescales',
     group: 'social-landlord-damp-mould',
     title: 'Social landlords: damp and mould hazards investigated and fixed within set timescales',
     source: { document: 'Social Housing (Regulation) Act 2023 and its regulations on hazards', edition: 'in force from late 2025 (from memory)' },
     confidence: 'from memory',
-    metric: 'qualitative-duty',
-    period: 'not-applicable',
-    status: 'law',
-    limit: null,
-    direction: 'none',
-    covers: { buildingUses: ['dwelling'], roomUses: 'any', situations: EXISTING, ventilation: 'any', tenures: ['social-rented'] },
-  },
+    covers: { buildingUses: ['dwelling'], roomUses: 'any', situations: ALL_SITUATIONS, ventilation: 'any', tenures: ['social-rented'] },
+  }),
   {
     id: 'bs5250-surface-rh',
     group: 'surface-rh',
@@ -218,7 +204,7 @@ export const DWELLING_CRITERIA: readonly Criterion[] = [
     status: 'guidance',
     limit: 80,
     direction: 'at-most',
-    covers: { buildingUses: ['dwelling', 'school', 'office', 'other'], roomUses: 'any', situations: EXISTING, ventilation: 'any' },
+    covers: { buildingUses: ['dwelling', 'school', 'office', 'other'], roomUses: 'any', situations: ALL_SITUATIONS, ventilation: 'any' },
     note: 'A monthly mean: a spot reading cannot establish mould risk. Glazing is checked at 100 % at any instant.',
   },
   ...en16798Co2Bands({

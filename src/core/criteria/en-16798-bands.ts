@@ -22,7 +22,11 @@ export const EN_16798_ASSUMED_CO2_OUTPUT_M3S = 0.02 / SECONDS_PER_HOUR;
 
 const CATEGORIES = ['I', 'II', 'III'] as const;
 
-/** The ΔCO2 band rows for a list of building uses and room uses. */
+/**
+ * The ΔCO2 band rows (categories I–III, ppm above outdoor) for a list of building and room uses.
+ * Example: en16798Co2Bands({ idPrefix: 'en16798-nonres-co2', limits_ppm: [550, 800, 1350], … })
+ * → three criteria, the second with id 'en16798-nonres-co2-ii' and limit 800 ppm.
+ */
 export function en16798Co2Bands(options: {
   idPrefix: string;
   limits_ppm: readonly [number, number, number];
@@ -52,7 +56,11 @@ export function en16798Co2Bands(options: {
 const PER_PERSON_LS = [10, 7, 4] as const;
 const LOW_POLLUTING_LS_M2 = [1.0, 0.7, 0.4] as const;
 
-/** The per-person plus per-area outdoor-air rows (non-residential, low-polluting building). */
+/**
+ * The per-person plus per-area outdoor-air rows (non-residential, low-polluting building), m³/s.
+ * Example: en16798FlowRates(['office'])[1] → category II, limit 7e-3 m³/s per person plus
+ * areaTerm_m3s_m2 7e-4 (7 L/s per person + 0.7 L/s per m²).
+ */
 export function en16798FlowRates(buildingUses: readonly BuildingUse[]): Criterion[] {
   return CATEGORIES.map((category, i) => ({
     id: `en16798-rate-${category.toLowerCase()}`,

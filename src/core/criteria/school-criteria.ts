@@ -20,6 +20,7 @@
  */
 import { fromLitresPerSecond } from '../units.ts';
 import type { Criterion, CriterionConfidence, BuildingSituation, VentilationType } from './criterion.ts';
+import { legalDuty } from './legal-duty.ts';
 
 const BB101 = { document: 'BB101 Guidelines on ventilation, thermal comfort and indoor air quality in schools', edition: '2018 (ESFA/DfE)' };
 const BB101_CO2 = { ...BB101, clause: 'CO2 performance criteria table (table number from memory: Table 3)' };
@@ -110,18 +111,13 @@ export const SCHOOL_CRITERIA: readonly Criterion[] = [
     direction: 'at-least',
     covers: { buildingUses: ['school'], roomUses: TEACHING, situations: ['new'], ventilation: 'any' },
   },
-  {
+  legalDuty({
     id: 'school-premises-2012-ventilation',
     group: 'school-premises-ventilation',
     title: 'School Premises Regulations: adequate ventilation of every room',
     source: { document: 'The School Premises (England) Regulations 2012', edition: 'SI 2012/1943', clause: 'ventilation regulation (number from memory)' },
     confidence: 'from memory',
-    metric: 'qualitative-duty',
-    period: 'not-applicable',
-    status: 'law',
-    limit: null,
-    direction: 'none',
     covers: { buildingUses: ['school'], roomUses: 'any', situations: ['new', 'refurbished', 'existing'], ventilation: 'any' },
     note: 'A duty without a number; BB101 is the guidance used to show it is met.',
-  },
+  }),
 ];
