@@ -19,7 +19,6 @@ import { en16798Co2Bands } from './en-16798-bands.ts';
 import { legalDuty } from './legal-duty.ts';
 
 const ADF_V1 = { document: 'Approved Document F, Volume 1: dwellings', edition: '2021 (in force 15 June 2022)' };
-const NEW_WORK: CriterionCoverage = { buildingUses: ['dwelling'], roomUses: 'any', situations: ['new'], ventilation: 'any' };
 const ALL_SITUATIONS = ['existing', 'refurbished', 'new'] as const;
 const HABITABLE = ['bedroom', 'living-room'] as const;
 
@@ -40,7 +39,7 @@ function adfRow(
     source: clause ? { ...ADF_V1, clause } : ADF_V1,
     status: 'statutory-guidance',
     direction: 'at-least',
-    covers: { ...NEW_WORK, roomUses, situations: situations ?? NEW_WORK.situations, ventilation: ventilation ?? 'any' },
+    covers: { buildingUses: ['dwelling'], roomUses, situations: situations ?? ['new'], ventilation: ventilation ?? 'any' },
   };
 }
 
