@@ -149,10 +149,14 @@ export function fitDecay<C>(input: DecayInput<C>): SupplyEstimate<C> {
  * error as SE × a t variate. Points at or below the drawn outdoor level make the draw fail.
  */
 function decayEvaluator(readings: readonly Reading[], t: readonly number[], xMean: number, sxx: number, slopeSe: number): SupplyEvaluator {
-  const y = new Array<number>(readings.length);
+  const levels = Float64Array.from(readings, (r) => r.level_ppm);
+  const y = new Float64Array(readings.length);
   return (x) => {
-    for (let i = 0; i < readings.length; i++) {
-      const excess = (readings[i]!.level_ppm - x.offset_ppm) / x.gain - x.outdoor_ppm;
+    // (reading − offset)/gain − outdoor = (reading − offset − gain·outdoor)/gain: the gain only
+    // shifts every log by the same amount, so the slope needs just the reading-scale background.
+    const background = x.offset_ppm + x.gain * x.outdoor_ppm;
+    for (let i = 0; i < levels.length; i++) {
+      const excess = levels[i]! - background;
       if (!(excess > 0)) return null;
       y[i] = Math.log(excess);
     }

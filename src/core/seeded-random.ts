@@ -35,13 +35,22 @@ export function createSeededRandom(seed: number): SeededRandom {
     return u === 0 ? 0.5 / 4294967296 : u;
   }
 
-  /** A point uniform in the unit disc (excluding the centre): x, y and w = x² + y². */
-  function discPoint(): [number, number, number] {
+  // A point uniform in the unit disc (excluding the centre), kept in locals rather than a
+  // returned tuple: Monte Carlo loops call this millions of times and must not allocate.
+  let discX = 0;
+  let discY = 0;
+  let discW = 0;
+  function drawDiscPoint(): void {
     for (;;) {
       const x = 2 * uniform() - 1;
       const y = 2 * uniform() - 1;
       const w = x * x + y * y;
-      if (w > 0 && w < 1) return [x, y, w];
+      if (w > 0 && w < 1) {
+        discX = x;
+        discY = y;
+        discW = w;
+        return;
+      }
     }
   }
 
@@ -51,15 +60,15 @@ export function createSeededRandom(seed: number): SeededRandom {
       spareNormal = null;
       return value;
     }
-    const [x, y, w] = discPoint();
-    const scale = Math.sqrt((-2 * Math.log(w)) / w);
-    spareNormal = y * scale;
-    return x * scale;
+    drawDiscPoint();
+    const scale = Math.sqrt((-2 * Math.log(discW)) / discW);
+    spareNormal = discY * scale;
+    return discX * scale;
   }
 
   function studentT(dof: number): number {
-    const [x, , w] = discPoint();
-    return x * Math.sqrt((dof * (Math.pow(w, -2 / dof) - 1)) / w);
+    drawDiscPoint();
+    return discX * Math.sqrt((dof * (Math.pow(discW, -2 / dof) - 1)) / discW);
   }
 
   return { uniform, normal, studentT };

@@ -80,7 +80,7 @@ export function fitStraightLine(x: readonly number[], y: readonly number[]): Str
  * x̄ and Sxx taken from an earlier fit on the same x.
  * Example: slopeOnSameX([0, 1, 2, 3], [1, 3, 5, 7.5], 1.5, 5) = 2.15.
  */
-export function slopeOnSameX(x: readonly number[], y: readonly number[], xMean: number, sxx: number): number {
+export function slopeOnSameX(x: ArrayLike<number>, y: ArrayLike<number>, xMean: number, sxx: number): number {
   let sxy = 0;
   for (let i = 0; i < x.length; i++) sxy += (x[i]! - xMean) * y[i]!;
   return sxy / sxx;
