@@ -51,7 +51,7 @@ export function validationProblems(error: z.ZodError, input?: unknown): Validati
   return error.issues.map((issue) => {
     const parent = valueAt(input, issue.path.slice(0, -1));
     const last = issue.path[issue.path.length - 1];
-    const present = last === undefined || (typeof parent === 'object' && parent !== null && last in parent);
+    const present = input === undefined || last === undefined || (typeof parent === 'object' && parent !== null && last in parent);
     const value = valueAt(input, issue.path);
     return {
       field: issue.path.map(String).join('.'),

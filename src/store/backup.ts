@@ -21,6 +21,7 @@ import { deleteSurveyRecords } from './delete-survey.ts';
 import { loadSurvey, type LoadOptions } from './load-survey.ts';
 import { listSurveys } from './surveys.ts';
 import { toSeriesRecord } from './series-columns.ts';
+import { commitNow, queue } from './write-requests.ts';
 
 export type ClashChoice = 'keep-both' | 'replace';
 
@@ -71,19 +72,19 @@ function copyTitle(title: string): string {
 function putDocument(tx: WriteTx, doc: SurveyDocument, photoBytes: ArrayBuffer[]): void {
   const surveyId = doc.survey.id;
   const owned = { surveyId };
-  void tx.objectStore('surveys').put(doc.survey);
-  doc.instruments.forEach((x, position) => void tx.objectStore('instruments').put({ ...x, ...owned, position }));
-  doc.areas.forEach((x, position) => void tx.objectStore('areas').put({ ...x, ...owned, position }));
+  queue(tx.objectStore('surveys').put(doc.survey));
+  doc.instruments.forEach((x, position) => queue(tx.objectStore('instruments').put({ ...x, ...owned, position })));
+  doc.areas.forEach((x, position) => queue(tx.objectStore('areas').put({ ...x, ...owned, position })));
   let readingPosition = 0;
   doc.rooms.forEach(({ readings, ...room }, position) => {
-    void tx.objectStore('rooms').put({ ...room, ...owned, position });
+    queue(tx.objectStore('rooms').put({ ...room, ...owned, position }));
     for (const reading of readings) {
-      void tx.objectStore('readings').put({ ...reading, roomId: room.id, ...owned, position: readingPosition++ });
+      queue(tx.objectStore('readings').put({ ...reading, roomId: room.id, ...owned, position: readingPosition++ }));
     }
   });
-  doc.series.forEach((x, position) => void tx.objectStore('series').put({ ...toSeriesRecord(x), ...owned, position }));
+  doc.series.forEach((x, position) => queue(tx.objectStore('series').put({ ...toSeriesRecord(x), ...owned, position })));
   doc.photos.forEach(({ jpegBase64: _text, ...photo }, position) =>
-    void tx.objectStore('photos').put({ ...photo, ...owned, position, bytes: photoBytes[position]!, type: 'image/jpeg' }),
+    queue(tx.objectStore('photos').put({ ...photo, ...owned, position, bytes: photoBytes[position]!, type: 'image/jpeg' })),
   );
 }
 
@@ -133,6 +134,7 @@ export async function importSurveys(
       for (const store of SURVEY_PART_STORES) for (const id of storeKeys(doc)[store]) takenBy[store].add(id);
       outcome.push({ surveyId: doc.survey.id, title: doc.survey.title, as });
     }
+    commitNow(tx);
     await tx.done;
     return outcome;
   });

@@ -4,6 +4,7 @@
 import type { IDBPTransaction } from 'idb';
 import type { Connection } from './connection.ts';
 import { ofSurvey, SURVEY_PART_STORES, type SurveyPartStore, type VentwalkDB } from './schema.ts';
+import { commitNow, queue } from './write-requests.ts';
 
 type WriteTx = IDBPTransaction<VentwalkDB, ('surveys' | SurveyPartStore)[], 'readwrite'>;
 
@@ -13,10 +14,10 @@ type WriteTx = IDBPTransaction<VentwalkDB, ('surveys' | SurveyPartStore)[], 'rea
  */
 export async function deleteSurveyRecords(tx: WriteTx, surveyId: string, keepPhotos = false): Promise<void> {
   const range = ofSurvey(surveyId);
-  void tx.objectStore('surveys').delete(surveyId);
+  queue(tx.objectStore('surveys').delete(surveyId));
   const stores = SURVEY_PART_STORES.filter((s) => !(keepPhotos && s === 'photos'));
   const keyLists = await Promise.all(stores.map((store) => tx.objectStore(store).index('bySurvey').getAllKeys(range)));
-  stores.forEach((store, i) => keyLists[i]!.forEach((key) => void tx.objectStore(store).delete(key)));
+  stores.forEach((store, i) => keyLists[i]!.forEach((key) => queue(tx.objectStore(store).delete(key))));
 }
 
 /** Delete one survey with all its rooms, readings, series and photos. */
@@ -24,6 +25,7 @@ export async function deleteSurvey(connection: Connection, surveyId: string): Pr
   await connection.run(async (db) => {
     const tx = db.transaction(['surveys', ...SURVEY_PART_STORES], 'readwrite', { durability: 'strict' });
     await deleteSurveyRecords(tx, surveyId);
+    commitNow(tx);
     await tx.done;
   });
 }

@@ -4,6 +4,7 @@
  * so a damaged entry reads as "not known" instead of breaking the app.
  */
 import type { Connection } from './connection.ts';
+import { commitNow, queue } from './write-requests.ts';
 
 export interface LastOpen {
   surveyId: string;
@@ -34,7 +35,8 @@ export async function readMeta<K extends keyof MetaFacts>(connection: Connection
 export async function writeMeta<K extends keyof MetaFacts>(connection: Connection, key: K, value: MetaFacts[K] | undefined): Promise<void> {
   await connection.run(async (db) => {
     const tx = db.transaction('meta', 'readwrite', { durability: 'strict' });
-    void (value === undefined ? tx.store.delete(key) : tx.store.put({ key, value }));
+    queue(value === undefined ? tx.store.delete(key) : tx.store.put({ key, value }));
+    commitNow(tx);
     await tx.done;
   });
 }

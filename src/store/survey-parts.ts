@@ -18,6 +18,7 @@ import type { Connection } from './connection.ts';
 import { StorageError } from './connection.ts';
 import { ofSurvey, type Owned, type SurveyPartStore, type VentwalkDB } from './schema.ts';
 import { toSeriesRecord } from './series-columns.ts';
+import { commitNow, queue } from './write-requests.ts';
 
 type PartTx = IDBPTransaction<VentwalkDB, ('surveys' | SurveyPartStore)[], 'readwrite'>;
 
@@ -55,11 +56,12 @@ export async function savePart<S extends SurveyPartStore>(
       throw new StorageError(refusal ?? 'This survey is no longer on the device', 'failed');
     }
     const position = existing ? existing.position : await nextPosition(tx, store, surveyId);
-    void tx.objectStore(store).put({ ...record, surveyId, position } as VentwalkDB[S]['value']);
+    queue(tx.objectStore(store).put({ ...record, surveyId, position } as VentwalkDB[S]['value']));
     const edited = editableRevision(survey);
     if (edited !== survey || changedAt > survey.updatedAt) {
-      void tx.objectStore('surveys').put({ ...edited, updatedAt: changedAt > survey.updatedAt ? changedAt : survey.updatedAt });
+      queue(tx.objectStore('surveys').put({ ...edited, updatedAt: changedAt > survey.updatedAt ? changedAt : survey.updatedAt }));
     }
+    commitNow(tx);
     await tx.done;
   });
 }

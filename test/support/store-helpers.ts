@@ -23,7 +23,7 @@ export async function dumpAll(connection: Connection): Promise<Record<string, un
   const db = await connection.get();
   const names = ['surveys', 'meta', ...SURVEY_PART_STORES] as const;
   const all = await Promise.all(names.map((name) => db.getAll(name)));
-  return Object.fromEntries(names.map((name, i) => [name, all[i]]));
+  return Object.fromEntries(names.map((name, i) => [name, all[i]!]));
 }
 
 /** Ids for new records in tests: 0f0f…-n, unique within the run. */
