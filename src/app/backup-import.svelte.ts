@@ -11,6 +11,7 @@ import { importSurveys, planImport, type ClashChoice, type ImportedSurvey, type 
 import { connection } from './storage-connection.ts';
 import { surveyList } from './survey-list.svelte.ts';
 import { formatBytes } from './format-bytes.ts';
+import { deviceStatus } from './device-status.svelte.ts';
 
 /** Largest file read at all: 300 MB (a backup with many photos; larger ones are not ours). */
 export const MAX_IMPORT_BYTES = 300_000_000;
@@ -91,6 +92,8 @@ class BackupImport {
     try {
       const imported = await importSurveys(connection, file, choices, () => crypto.randomUUID());
       this.stage = { kind: 'done', name, imported };
+      // Restored surveys are real data: ask for protected storage (a refusal is a normal answer).
+      void deviceStatus.requestProtection().catch(() => undefined);
       await surveyList.refresh();
     } catch (error) {
       this.stage = { kind: 'failed', name, message: error instanceof Error ? error.message : String(error) };

@@ -7,23 +7,13 @@ import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import { readFileSync, writeFileSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { createRequire } from 'node:module';
 import type { BrowserContext, Page } from 'playwright-core';
 import { openPhone } from '../support/browser.ts';
+import { axeViolations } from '../support/axe.ts';
 import { readSurveyFile } from '../../src/model/survey-file.ts';
 
 const baseURL = inject('baseURL');
 const demoPath = new URL('../fixtures/demo-survey.json', import.meta.url).pathname;
-const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
-
-async function axeViolations(page: Page): Promise<string[]> {
-  await page.addScriptTag({ content: axeSource });
-  const result = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; help: string; nodes: unknown[] }> }> } }).axe;
-    return axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa'] } });
-  });
-  return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.length} nodes)`);
-}
 
 describe.skipIf(!baseURL)('survey records in Chromium (phone)', () => {
   let context: BrowserContext;

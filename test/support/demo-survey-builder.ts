@@ -13,9 +13,11 @@ import { makeSurveyFile, type SurveyFile } from '../../src/model/survey-file.ts'
 import type { SurveyDocument, DocumentRoom } from '../../src/model/survey-document.ts';
 import type { Reading, Conditions } from '../../src/model/reading.ts';
 import type { OccupantGroupRecord } from '../../src/model/occupancy.ts';
+import type { ExposedWall } from '../../src/model/exposed-wall.ts';
 import type { Opening } from '../../src/model/opening.ts';
 import type { LoggerSeries } from '../../src/model/logger-series.ts';
 import type { Survey } from '../../src/model/survey.ts';
+import { newSurveyRecord } from '../../src/model/survey-defaults.ts';
 
 /** Deterministic ids: dea1xxxx-… (version 4, variant 8), numbered in the order they are made. */
 function idMaker(): () => string {
@@ -127,6 +129,29 @@ function room(partial: Partial<DocumentRoom> & Pick<DocumentRoom, 'name' | 'use'
   };
 }
 
+/** A box-shaped classroom with one exposed wall, the class and its teacher. */
+function classroom(
+  name: string,
+  clientRef: string,
+  areaId: string,
+  [length_m, width_m, height_m]: [number, number, number],
+  wall: Pick<ExposedWall, 'facing' | 'construction'>,
+  occupants: OccupantGroupRecord[],
+  rest: Partial<DocumentRoom> = {},
+): DocumentRoom {
+  return room({
+    name,
+    clientRef,
+    areaId,
+    use: 'classroom',
+    geometry: { kind: 'box', length_m, width_m, height_m },
+    exposedWalls: [{ id: id(), ...wall, length_m }],
+    occupants,
+    schedule: { template: 'classroom', periods: [] },
+    ...rest,
+  });
+}
+
 function window(partial: Partial<Extract<Opening, { type: 'window' }>>): Opening {
   return {
     type: 'window',
@@ -141,22 +166,11 @@ function window(partial: Partial<Extract<Opening, { type: 'window' }>>): Opening
 }
 
 function header(partial: Partial<Survey> & Pick<Survey, 'title' | 'site' | 'buildingUse'>): Survey {
+  const { title, site, buildingUse } = partial;
   return {
-    id: id(),
-    client: '',
+    ...newSurveyRecord({ title, site, buildingUse }, id(), '2026-01-14T08:00:00Z'),
     surveyors: [{ name: 'Demo Surveyor (invented)', qualifications: 'Invented for the demo' }],
-    purpose: '',
-    scope: '',
-    visits: [],
-    construction: '',
-    units: 'si',
-    weather: { conditions: '' },
-    outdoorReadings: [],
-    designWeather: [],
     notes: 'INVENTED DATA for the Ventwalk demo: every name, place, person and reading here is made up.',
-    revision: 1,
-    issued: [],
-    createdAt: '2026-01-14T08:00:00Z',
     updatedAt: '2026-01-14T17:00:00Z',
     ...partial,
   };
@@ -232,14 +246,7 @@ function schoolSurvey(): SurveyDocument {
   const buildUp = readingsUnder(b1, { supply: 0.055, present: [28, 1], conditions: LESSON }, at(day, '09:00'), 50, 5, 640, { temp: 20.5, rh: 48 });
   const decay = readingsUnder(b1, { supply: 0.055, present: [0, 0], conditions: CLOSED_EMPTY }, at(day, '10:00'), 20, 2, buildUp.endPpm - 40, { temp: 20.2, rh: 46 });
   const seized = window({ count: 1, facing: 'SW', hinge: 'top', sashWidth_m: 0.9, sashHeight_m: 0.6, sillHeight_m: 1.9, headHeight_m: 2.5, openingAngle_deg: 0, operability: 'seized', condition: 'Paint-bound and hinge arms corroded; cannot be opened by hand.' });
-  const roomB1 = room({
-    name: 'Classroom B1',
-    clientRef: 'B.G.04',
-    areaId: ground.id,
-    use: 'classroom',
-    geometry: { kind: 'box', length_m: 7.2, width_m: 7.0, height_m: 2.9 },
-    exposedWalls: [{ id: id(), facing: 'SW', construction: 'cavity-unfilled', length_m: 7.2 }],
-    occupants: b1Groups,
+  const roomB1 = classroom('Classroom B1', 'B.G.04', ground.id, [7.2, 7.0, 2.9], { facing: 'SW', construction: 'cavity-unfilled' }, b1Groups, {
     schedule: {
       template: 'classroom',
       periods: [
@@ -271,15 +278,7 @@ function schoolSurvey(): SurveyDocument {
   const b2Groups = [pupils(), teacher()];
   const b2 = { volume: 8 * 7 * 2.7, groups: b2Groups, instrumentId: handheld.id, outdoor };
   const spot = readingsUnder(b2, { supply: 0.16, present: [28, 1], conditions: { ...LESSON, windows: 'some-open' } }, at(day, '11:40'), 0, 1, 1020, { temp: 21.2, rh: 44 });
-  const roomB2 = room({
-    name: 'Classroom B2',
-    clientRef: 'B.G.06',
-    areaId: ground.id,
-    use: 'classroom',
-    geometry: { kind: 'box', length_m: 8, width_m: 7, height_m: 2.7 },
-    exposedWalls: [{ id: id(), facing: 'SW', construction: 'cavity-filled', length_m: 8 }],
-    occupants: b2Groups,
-    schedule: { template: 'classroom', periods: [] },
+  const roomB2 = classroom('Classroom B2', 'B.G.06', ground.id, [8, 7, 2.7], { facing: 'SW', construction: 'cavity-filled' }, b2Groups, {
     openings: [
       window({ count: 4, facing: 'SW', hinge: 'side', sashWidth_m: 0.6, sashHeight_m: 1.2, sillHeight_m: 0.9, headHeight_m: 2.1, openingAngle_deg: 30, restrictor: 'yes', operability: 'restricted', condition: 'Good.' }),
       { type: 'vent', id: id(), count: 4, facing: 'SW', condition: 'Open, clean.', kind: 'background-vent', purpose: 'room', labelArea_m2: 0.005, labelAreaIs: 'equivalent', operability: 'opens' },
@@ -289,15 +288,8 @@ function schoolSurvey(): SurveyDocument {
 
   // B3: a logger over the school day at one-minute intervals.
   const b3Groups = [pupils(), teacher()];
-  const roomB3 = room({
-    name: 'Classroom B3',
-    clientRef: 'B.1.02',
-    areaId: first.id,
-    use: 'classroom',
+  const roomB3 = classroom('Classroom B3', 'B.1.02', first.id, [7.2, 7, 2.9], { facing: 'NE', construction: 'cavity-unfilled' }, b3Groups, {
     geometry: { kind: 'parts', parts: [{ kind: 'box', length_m: 7.2, width_m: 7, height_m: 2.9 }, { kind: 'area', floorArea_m2: 4.5, height_m: 2.4 }] },
-    exposedWalls: [{ id: id(), facing: 'NE', construction: 'cavity-unfilled', length_m: 7.2 }],
-    occupants: b3Groups,
-    schedule: { template: 'classroom', periods: [] },
     openings: [window({ count: 4, facing: 'NE', hinge: 'bottom', sashWidth_m: 0.9, sashHeight_m: 0.5, sillHeight_m: 2.0, headHeight_m: 2.5, openingAngle_deg: 20, operability: 'opens' })],
     notes: 'Logger on the back wall at 1.1 m, away from windows and radiators, 08:00-16:00.',
   });
@@ -525,7 +517,7 @@ function officeSurvey(): SurveyDocument {
     visits: [{ start: at(day, '08:15'), end: at(day, '12:30') }],
     ventilation: 'mechanical',
     stage: 'refurbished',
-    construction: 'Steel frame, curtain walling; ceiling supply diffusers from a rooftop air handler (2015 refit).',
+    construction: 'Steel frame, curtain walling with no opening lights; ceiling supply diffusers from a rooftop air handler (2015 refit).',
     builtYear: 1989,
     storeys: 5,
     terrain: 'city-centre',
@@ -552,14 +544,13 @@ function officeSurvey(): SurveyDocument {
     schedule: { template: 'office', periods: [] },
     openings: [
       { type: 'fan', id: id(), count: 12, condition: 'Ceiling supply diffusers; flow not measured (no hood on site).', direction: 'supply', ratedFlow_m3s: 0.03, humidistat: 'no', isolator: 'none', ducting: 'ducted' },
-      window({ count: 6, style: 'fixed', facing: 'W', sashWidth_m: 1.5, sashHeight_m: 1.8, sillHeight_m: 0.8, headHeight_m: 2.6, operability: 'opens' }),
     ],
     tests: [{ id: id(), kind: 'build-up', readingIds: arrivals.readings.map((r) => r.id), note: 'From 09:00 with 36 at desks.' }],
     readings: arrivals.readings,
   });
   const meetingGroups = [group('Meeting', 8, '30-40', 'mixed', 1.2)];
   const meeting = { volume: 5 * 4 * 2.7, groups: meetingGroups, instrumentId: handheld.id, outdoor };
-  const afterMeeting = readingsUnder(meeting, { supply: 0.022, present: [0], conditions: { ...office, doors: 'closed' } }, at(day, '11:05'), 30, 3, 1720, { temp: 23.1, rh: 41 });
+  const afterMeeting = readingsUnder(meeting, { supply: 0.022, present: [0], conditions: office }, at(day, '11:05'), 30, 3, 1720, { temp: 23.1, rh: 41 });
   const meetingRoom = room({
     name: 'Meeting room',
     clientRef: '2.03',
