@@ -96,6 +96,19 @@ export class Autosave<T> {
     if (this.dirty && (this.state as SaveState) === 'pending') await this.flush();
   }
 
+  /**
+   * The form is closing with input that was refused (it broke a rule, so it was never a save
+   * to retry): the stored version stands, and an app update need not wait for it.
+   * A failed save of valid input is kept (and retried on the next flush).
+   */
+  closeForm(): void {
+    if (this.state !== 'failed' || this.dirty) return;
+    this.state = 'saved';
+    this.error = null;
+    this.release?.();
+    this.release = null;
+  }
+
   /** Try the failed save again. */
   retry(): Promise<void> {
     return this.flush();

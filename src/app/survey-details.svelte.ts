@@ -78,6 +78,7 @@ class SurveyDetails {
   /** Leaving the screen: save what is pending and forget the survey as "open". */
   async close(): Promise<void> {
     await this.autosave.flush();
+    this.autosave.closeForm();
     void rememberOpen(undefined);
   }
 

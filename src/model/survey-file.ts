@@ -11,7 +11,7 @@
  */
 import { z } from 'zod';
 import { surveyDocumentSchema } from './survey-document.ts';
-import { CURRENT_FORMAT_VERSION, MIGRATIONS, migrateFile, type Migration, type RawFile } from './migrations.ts';
+import { CURRENT_FORMAT_VERSION, migrateFile, type RawFile } from './migrations.ts';
 import { validationProblems, type ValidationProblem } from './validation-problem.ts';
 import { dateTime, text } from './field-rules.ts';
 import { recordIds } from './survey-references.ts';
@@ -48,8 +48,8 @@ const whole = (message: string, value?: unknown): ReadResult => ({
   problems: [{ field: '', message, value }],
 });
 
-/** Parse the text of a survey file: JSON, then format and version, then migrations, then every rule. */
-export function readSurveyFile(textOrValue: string | unknown, migrations: readonly Migration[] = MIGRATIONS): ReadResult {
+/** Check a survey file (its text, or its parsed JSON): format and version, then migrations, then every rule. */
+export function readSurveyFile(textOrValue: unknown): ReadResult {
   let value: unknown = textOrValue;
   if (typeof textOrValue === 'string') {
     try {
@@ -67,7 +67,7 @@ export function readSurveyFile(textOrValue: string | unknown, migrations: readon
     return whole(`This is not a Ventwalk survey file: its format is ${JSON.stringify(raw.format) ?? 'missing'}, not "${FORMAT_NAME}"`, raw.format);
   }
   const version = raw.version;
-  const current = migrations.length + 1;
+  const current = CURRENT_FORMAT_VERSION;
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
     return whole('The file’s version is missing or not a whole number', version);
   }
@@ -77,11 +77,10 @@ export function readSurveyFile(textOrValue: string | unknown, migrations: readon
       version,
     );
   }
-  const migrated = migrateFile(raw, version, migrations);
-  const schema = migrations === MIGRATIONS ? surveyFileSchema : surveyFileSchema.extend({ version: z.literal(current) });
-  const parsed = schema.safeParse(migrated);
+  const migrated = migrateFile(raw, version);
+  const parsed = surveyFileSchema.safeParse(migrated);
   if (!parsed.success) return { ok: false, problems: validationProblems(parsed.error, migrated) };
-  return { ok: true, file: parsed.data as SurveyFile, fromVersion: version };
+  return { ok: true, file: parsed.data, fromVersion: version };
 }
 
 /** A file holding the given surveys, stamped with the format, version and time of export. */

@@ -23,7 +23,7 @@ import { commitNow, queue } from './write-requests.ts';
 type PartTx = IDBPTransaction<VentwalkDB, ('surveys' | SurveyPartStore)[], 'readwrite'>;
 
 /** The position after the last record of a survey in a store (0 for the first). */
-export async function nextPosition(tx: PartTx, store: SurveyPartStore, surveyId: string): Promise<number> {
+async function nextPosition(tx: PartTx, store: SurveyPartStore, surveyId: string): Promise<number> {
   const cursor = await tx.objectStore(store).index('bySurvey').openKeyCursor(ofSurvey(surveyId), 'prev');
   return cursor ? (cursor.key as [string, number])[1] + 1 : 0;
 }
@@ -58,8 +58,9 @@ export async function savePart<S extends SurveyPartStore>(
     const position = existing ? existing.position : await nextPosition(tx, store, surveyId);
     queue(tx.objectStore(store).put({ ...record, surveyId, position } as VentwalkDB[S]['value']));
     const edited = editableRevision(survey);
-    if (edited !== survey || changedAt > survey.updatedAt) {
-      queue(tx.objectStore('surveys').put({ ...edited, updatedAt: changedAt > survey.updatedAt ? changedAt : survey.updatedAt }));
+    const later = Date.parse(changedAt) > Date.parse(survey.updatedAt);
+    if (edited !== survey || later) {
+      queue(tx.objectStore('surveys').put({ ...edited, updatedAt: later ? changedAt : survey.updatedAt }));
     }
     commitNow(tx);
     await tx.done;
@@ -73,10 +74,16 @@ export async function saveRoom(connection: Connection, surveyId: string, room: R
   return record;
 }
 
-/** Save one reading of a room; the room must already be saved. */
-export async function saveReading(connection: Connection, surveyId: string, roomId: string, reading: Reading): Promise<Reading> {
+/** Save one reading of a room (the room must already be saved); `changedAt` is when it was entered. */
+export async function saveReading(
+  connection: Connection,
+  surveyId: string,
+  roomId: string,
+  reading: Reading,
+  changedAt: string,
+): Promise<Reading> {
   const record = readingSchema.parse(reading);
-  await savePart(connection, 'readings', surveyId, { ...record, roomId }, record.time, async (tx) => {
+  await savePart(connection, 'readings', surveyId, { ...record, roomId }, changedAt, async (tx) => {
     const room = await tx.objectStore('rooms').get(roomId);
     return room?.surveyId === surveyId ? undefined : 'The room for this reading is not saved on the device';
   });

@@ -102,6 +102,20 @@ describe('autosave', () => {
     expect(unsavedInput.pending).toBe(true);
   });
 
+  it('lets refused input go when its form closes, but keeps a failed save of valid input', async () => {
+    const { autosave, failWith } = recorder();
+    autosave.refuse('Survey title is empty: give the survey a name');
+    autosave.closeForm();
+    expect(autosave.state).toBe('saved');
+    expect(unsavedInput.forms).not.toContain('test form');
+    failWith(new Error('full'));
+    autosave.edit('valid but not saved');
+    await autosave.flush();
+    autosave.closeForm();
+    expect(autosave.state).toBe('failed');
+    expect(autosave.unsaved).toBe('valid but not saved');
+  });
+
   it('saves at once when the page is hidden or unloaded', async () => {
     const { autosave, saved } = recorder();
     const target = new EventTarget() as unknown as Window;

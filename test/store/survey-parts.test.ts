@@ -1,6 +1,6 @@
 import { describe, it, expect, afterEach, vi } from 'vitest';
 import { openDB } from 'idb';
-import { saveReading, saveRoom, saveSeries } from '../../src/store/survey-parts.ts';
+import { saveArea, saveInstrument, saveReading, saveRoom, saveSeries } from '../../src/store/survey-parts.ts';
 import { duplicateRoom } from '../../src/store/duplicate-room.ts';
 import { importSurveys } from '../../src/store/backup.ts';
 import { loadSurvey } from '../../src/store/load-survey.ts';
@@ -45,10 +45,10 @@ describe('saving parts of a survey', () => {
     const { connection, school } = await withSchool();
     const room = school.rooms[2]!;
     const reading = { id: '0e0e0000-0000-4000-8000-000000000101', time: '2026-01-14T16:10:00Z', co2_ppm: 612, conditions: { people: [], windows: 'all-closed' as const, doors: 'closed' as const, fans: 'none' as const, heating: 'on' as const, combustion: false }, note: '' };
-    await saveReading(connection, school.survey.id, room.id, reading);
+    await saveReading(connection, school.survey.id, room.id, reading, '2026-01-14T16:11:00Z');
     expect((await loadSurvey(connection, school.survey.id, { photos: true }))!.rooms[2]!.readings).toEqual([reading]);
     const before = await dumpAll(connection);
-    await expect(saveReading(connection, school.survey.id, '0e0e0000-0000-4000-8000-0000000009ff', { ...reading, id: '0e0e0000-0000-4000-8000-000000000102' })).rejects.toThrow(/room for this reading is not saved/);
+    await expect(saveReading(connection, school.survey.id, '0e0e0000-0000-4000-8000-0000000009ff', { ...reading, id: '0e0e0000-0000-4000-8000-000000000102' }, '2026-01-14T16:12:00Z')).rejects.toThrow(/room for this reading is not saved/);
     expect(await dumpAll(connection)).toEqual(before);
   });
 
@@ -67,6 +67,17 @@ describe('saving parts of a survey', () => {
     const { readings: _r, ...room } = school.rooms[0]!;
     await saveRoom(connection, school.survey.id, { ...room, notes: 'After issue', updatedAt: '2026-01-21T09:00:00Z' });
     expect((await getSurvey(connection, school.survey.id))!.revision).toBe(2);
+  });
+
+  it('adds an instrument and an area after the ones already there', async () => {
+    const { connection, school } = await withSchool();
+    const instrument = { ...school.instruments[0]!, id: '0e0e0000-0000-4000-8000-000000000501', serial: 'DEMO-H-0099' };
+    const area = { id: '0e0e0000-0000-4000-8000-000000000502', kind: 'floor' as const, name: 'Second floor', clientRef: 'B-2', notes: '' };
+    await saveInstrument(connection, school.survey.id, instrument, '2026-01-15T08:00:00Z');
+    await saveArea(connection, school.survey.id, area, '2026-01-15T08:01:00Z');
+    const loaded = await loadSurvey(connection, school.survey.id, { photos: true });
+    expect(loaded!.instruments.at(-1)).toEqual(instrument);
+    expect(loaded!.areas.map((a) => a.name)).toEqual([...school.areas.map((a) => a.name), 'Second floor']);
   });
 
   it('stores logger columns as Float64Array and gives back plain numbers', async () => {

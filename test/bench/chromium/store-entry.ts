@@ -99,7 +99,7 @@ export async function runStoreBench(surveys: number, rooms: number, readings: nu
   const saveMs: number[] = [];
   for (let i = 0; i < saves; i += 1) {
     const reading: Reading = { ...room.readings[0]!, id: uuid(0xbe000000, i + 1), time: new Date(Date.UTC(2026, 0, 15, 9) + i * 1000).toISOString(), co2_ppm: 800 + i };
-    saveMs.push((await timed(() => saveReading(cold, target, room.id, reading)))[1]);
+    saveMs.push((await timed(() => saveReading(cold, target, room.id, reading, reading.time)))[1]);
   }
   cold.close();
   return {
