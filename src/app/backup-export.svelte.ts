@@ -1,8 +1,8 @@
 /**
- * Making a backup: the survey file of all surveys (or one), with or without photos, prepared
+ * Making a backup: the survey file of all surveys (or of one), with or without photos, prepared
  * first and then shared or downloaded from a tap. A file above `LARGE_BACKUP_BYTES` gets a
  * warning (mail and messaging apps often refuse such files) and the offer of one without photos.
- * Once handed over, the time is remembered as the last backup.
+ * Once a file of all surveys is handed over, the time is remembered as the last backup.
  */
 import { exportSurveys } from '../store/backup.ts';
 import { readMeta, writeMeta } from '../store/meta.ts';
@@ -13,6 +13,8 @@ import { canShareFile, downloadFile, shareFile } from './deliver-file.ts';
 export const LARGE_BACKUP_BYTES = 25_000_000;
 
 export interface PreparedBackup {
+  /** What it holds: every survey, or one survey's id. */
+  scope: 'all' | string;
   file: File;
   surveyCount: number;
   withPhotos: boolean;
@@ -43,15 +45,18 @@ class BackupExport {
     }
   }
 
-  /** Build the backup file (all surveys, or the given ones). */
-  async prepare(withPhotos: boolean, surveyIds: readonly string[] | 'all' = 'all', now = new Date()): Promise<void> {
+  /** Build the backup file of every survey, or of one survey (by id). */
+  async prepare(withPhotos: boolean, scope: 'all' | string = 'all', now = new Date()): Promise<void> {
     this.busy = true;
     this.error = null;
     this.prepared = null;
     try {
-      const file = await exportSurveys(connection, surveyIds, { photos: withPhotos }, { exportedAt: now.toISOString(), app: __APP_VERSION__ });
-      const blob = new File([JSON.stringify(file)], backupFileName(now), { type: 'application/json' });
+      const ids = scope === 'all' ? 'all' : [scope];
+      const file = await exportSurveys(connection, ids, { photos: withPhotos }, { exportedAt: now.toISOString(), app: __APP_VERSION__ });
+      const name = backupFileName(now, scope === 'all' ? 'backup' : 'survey');
+      const blob = new File([JSON.stringify(file)], name, { type: 'application/json' });
       this.prepared = {
+        scope,
         file: blob,
         surveyCount: file.surveys.length,
         withPhotos,
@@ -70,19 +75,22 @@ class BackupExport {
     const prepared = this.prepared;
     if (!prepared) return;
     try {
-      if (await shareFile(prepared.file)) await this.handedOver();
+      if (await shareFile(prepared.file)) await this.handedOver(prepared);
     } catch (error) {
       this.error = `Could not share the backup: ${error instanceof Error ? error.message : String(error)}. Try the download instead.`;
     }
   }
 
   async download(): Promise<void> {
-    if (!this.prepared) return;
-    downloadFile(this.prepared.file);
-    await this.handedOver();
+    const prepared = this.prepared;
+    if (!prepared) return;
+    downloadFile(prepared.file);
+    await this.handedOver(prepared);
   }
 
-  private async handedOver(now = new Date()): Promise<void> {
+  /** A file of every survey handed over counts as the last backup (a one-survey file does not). */
+  private async handedOver(prepared: PreparedBackup, now = new Date()): Promise<void> {
+    if (prepared.scope !== 'all') return;
     const stamp = now.toISOString();
     this.lastBackupAt = stamp;
     await writeMeta(connection, 'lastBackupAt', stamp).catch((error: unknown) => {
