@@ -5,13 +5,15 @@
  */
 import { surveySchema, type Survey, type SurveySummary } from '../model/survey.ts';
 import type { Connection } from './connection.ts';
+import { commitNow, queue } from './write-requests.ts';
 
 /** Save (create or replace) one survey. Throws StorageError or the schema's error; never half-writes. */
 export async function saveSurvey(connection: Connection, survey: Survey): Promise<Survey> {
   const record = surveySchema.parse(survey);
   await connection.run(async (db) => {
     const tx = db.transaction('surveys', 'readwrite', { durability: 'strict' });
-    void tx.store.put(record);
+    queue(tx.store.put(record));
+    commitNow(tx);
     await tx.done;
   });
   return record;

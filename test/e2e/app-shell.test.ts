@@ -4,12 +4,11 @@
  */
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
 import type { BrowserContext, Page } from 'playwright-core';
 import { openPhone } from '../support/browser.ts';
+import { axeViolations } from '../support/axe.ts';
 
 const baseURL = inject('baseURL');
-const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
 
 describe.skipIf(!baseURL)('app shell in Chromium (phone)', () => {
   let context: BrowserContext;
@@ -27,15 +26,6 @@ describe.skipIf(!baseURL)('app shell in Chromium (phone)', () => {
   afterAll(async () => {
     await close?.();
   });
-
-  async function axeViolations(): Promise<string[]> {
-    await page.addScriptTag({ content: axeSource });
-    const result = await page.evaluate(async () => {
-      const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; help: string; nodes: unknown[] }> }> } }).axe;
-      return axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa'] } });
-    });
-    return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.length} nodes)`);
-  }
 
   it('loads the start screen and fits a 390 px phone without sideways scrolling', async () => {
     await expect(page.getByRole('heading', { name: 'Start a survey' }).isVisible()).resolves.toBe(true);
@@ -91,7 +81,7 @@ describe.skipIf(!baseURL)('app shell in Chromium (phone)', () => {
   });
 
   it('has no WCAG 2 A/AA violations on the start screen', async () => {
-    expect(await axeViolations()).toEqual([]);
+    expect(await axeViolations(page)).toEqual([]);
   });
 
   it('shows version, installation and storage facts in settings, with no WCAG 2 A/AA violations', async () => {
@@ -103,7 +93,7 @@ describe.skipIf(!baseURL)('app shell in Chromium (phone)', () => {
     // Headless Chromium always refuses persist(): "not protected" is the honest answer.
     await page.getByTestId('storage-protection').getByText(/Not protected/).waitFor();
     await expect(page.getByTestId('storage-use').innerText()).resolves.toMatch(/of .* available/);
-    expect(await axeViolations()).toEqual([]);
+    expect(await axeViolations(page)).toEqual([]);
   });
 
   it('makes no request to any origin but its own', () => {

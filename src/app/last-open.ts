@@ -1,0 +1,22 @@
+/**
+ * The survey (and, once room screens exist, the room) that was open, remembered durably so a
+ * cold start — iOS restarts installed apps at their start URL after killing them in the
+ * background — reopens there. Leaving for the survey list forgets it.
+ */
+import { readMeta, writeMeta, type LastOpen } from '../store/meta.ts';
+import { getSurvey } from '../store/surveys.ts';
+import { connection } from './storage-connection.ts';
+import { navigation } from './navigation.svelte.ts';
+
+/** Remember what is open (undefined: nothing). Failures are ignored: this is a convenience. */
+export async function rememberOpen(open: LastOpen | undefined): Promise<void> {
+  await writeMeta(connection, 'lastOpen', open).catch(() => undefined);
+}
+
+/** On a bare cold start, go back to the survey that was open, if it is still on the device. */
+export async function reopenLast(): Promise<void> {
+  if (!navigation.startedBare) return;
+  const last = await readMeta(connection, 'lastOpen').catch(() => undefined);
+  if (!last || !(await getSurvey(connection, last.surveyId).catch(() => undefined))) return;
+  if (navigation.screen === 'surveys') navigation.go('survey', last.surveyId);
+}

@@ -1,0 +1,17 @@
+/** WCAG 2 A and AA violations on a page, found by axe-core injected into it. */
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import type { Page } from 'playwright-core';
+
+const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
+
+type AxeRun = (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; help: string; nodes: unknown[] }> }>;
+
+export async function axeViolations(page: Page): Promise<string[]> {
+  await page.addScriptTag({ content: axeSource });
+  const result = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run: AxeRun } }).axe;
+    return axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa'] } });
+  });
+  return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.length} nodes)`);
+}
