@@ -7,7 +7,7 @@
  * Three occupancies:
  * - present: the people recorded with a reading (its conditions);
  * - as found: for each group, the most recorded present at any reading of the visit; a group
- *   never recorded counts in full (assumed);
+ *   never recorded present (only empty-room readings, or none) counts in full (assumed);
  * - design: every group in full (the room's stated occupancy).
  *
  * Example: a classroom of 28 pupils 6–11 (mixed, 1.2 met) and a teacher 30–40 (female, 1.6 met)
@@ -71,7 +71,7 @@ export function designCounts(room: DocumentRoom): GroupCounts {
 export function asFoundCounts(room: DocumentRoom): { counts: GroupCounts; assumed: boolean } {
   const most = new Map<string, number>();
   for (const reading of room.readings) {
-    for (const [id, n] of presentCounts(reading.conditions)) most.set(id, Math.max(most.get(id) ?? 0, n));
+    for (const [id, n] of presentCounts(reading.conditions)) if (n > 0) most.set(id, Math.max(most.get(id) ?? 0, n));
   }
   const assumed = room.occupants.some((g) => !most.has(g.id));
   return { counts: new Map(room.occupants.map((g) => [g.id, most.get(g.id) ?? g.count])), assumed };

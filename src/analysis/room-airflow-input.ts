@@ -48,6 +48,8 @@ export function exposedEnvelope(room: DocumentRoom, ceilingHeight_m: number): { 
   return { area_m2: area, assumed };
 }
 
+type Terminal = NonNullable<NonNullable<Area['dwelling']>['system']>['terminals'][number];
+
 const SYSTEMS: Readonly<Record<string, FanSystem>> = {
   'continuous-extract': 'whole-dwelling-extract',
   'heat-recovery': 'whole-dwelling-balanced',
@@ -56,17 +58,17 @@ const SYSTEMS: Readonly<Record<string, FanSystem>> = {
 };
 
 /**
- * The dwelling system's terminals as fans, for one room (roomId given) or all (roomId null).
+ * The dwelling system's terminals kept by `keep` (e.g. those serving one room), as fans.
  * Example: a continuous-extract system with a 0.008 m³/s bathroom terminal → one FanInput, system 'whole-dwelling-extract'.
  */
-export function terminalFans(area: Area, roomId: string | null, warnings: AnalysisWarning[]): FanInput[] {
+export function terminalFans(area: Area, keep: (t: Terminal) => boolean, warnings: AnalysisWarning[]): FanInput[] {
   const system = area.dwelling?.system;
   if (!system || system.kind === 'none') return [];
   if (system.running === 'not-checked') {
     warnings.push(analysisWarning('system-state-unknown', 'caution', `Whether the ${area.name} system was running was not checked; it is counted as running.`));
   }
   return system.terminals
-    .filter((t) => roomId === null || t.roomId === roomId)
+    .filter(keep)
     .flatMap((t, i): FanInput[] => {
       if (t.setting === 'boost') {
         warnings.push(analysisWarning('terminal-at-boost', 'caution', `A terminal (${t.location || 'no location'}) was measured at boost, which is not its continuous flow: not counted. Measure it at its normal setting.`));
@@ -98,7 +100,7 @@ export function roomAirflowInput(ctx: RoomAirflowContext, state: RoomState, time
   }
   const longest = Math.max(0, ...room.exposedWalls.map((w) => w.length_m ?? 0));
   const isFlat = ctx.areaChain.some((a) => a.kind === 'flat');
-  const terminals = ctx.areaChain.flatMap((a) => terminalFans(a, room.id, warnings));
+  const terminals = ctx.areaChain.flatMap((a) => terminalFans(a, (t) => t.roomId === room.id, warnings));
   const input: RoomAirflowInput = {
     id: room.id,
     ceilingHeight_m,
