@@ -19,8 +19,7 @@
  */
 import { ENGINE_VERSION } from '../core/engine-version.ts';
 import { CURRENT_FORMAT_VERSION } from '../model/migrations.ts';
-import type { Area } from '../model/area.ts';
-import { roomFloorArea, roomVolume, type Geometry } from '../model/room-geometry.ts';
+import { roomFloorArea, roomVolume } from '../model/room-geometry.ts';
 import type { DocumentRoom, SurveyDocument } from '../model/survey-document.ts';
 import { analysisWarning, fromEngineWarning, uniqueWarnings, type AnalysisWarning } from './analysis-warnings.ts';
 import { assessArea } from './area-assessment.ts';
@@ -31,7 +30,7 @@ import { asFoundCounts, designCounts, occupancyOf, roomAir, roomTemperature } fr
 import { readingSets } from './reading-sets.ts';
 import { reconcile } from './reconcile.ts';
 import type { AnalysisResults, Figure, RoomHeadline, RoomResults } from './results.ts';
-import { exposedEnvelope, roomAirflowInput, type RoomAirflowContext } from './room-airflow-input.ts';
+import { ceilingHeight, exposedEnvelope, roomAirflowContext, roomAirflowInput } from './room-airflow-input.ts';
 import { closedState, stateFromConditions, ventsOpenState, windowsOpenState, type RoomState } from './room-state.ts';
 import { roomScenarios } from './scenarios.ts';
 import { siteInputs, type SiteInputs } from './site-inputs.ts';
@@ -52,24 +51,6 @@ export interface AnalysisOptions {
 export const DEFAULT_DRAWS = 1000;
 export const DEFAULT_THRESHOLDS_PPM: readonly number[] = [1000, 1500];
 export const DEFAULT_WINDOW_S = 1200;
-
-/** Floor-to-ceiling height: the tallest part, m. */
-function ceilingHeight(geometry: Geometry): number {
-  return geometry.kind === 'parts' ? Math.max(...geometry.parts.map((p) => p.height_m)) : geometry.height_m;
-}
-
-/** The room's area and those it sits in, innermost first (a cycle stops the walk). */
-function areaChain(areaId: string | undefined, areas: readonly Area[]): Area[] {
-  const chain: Area[] = [];
-  let id = areaId;
-  while (id !== undefined && !chain.some((a) => a.id === id)) {
-    const area = areas.find((a) => a.id === id);
-    if (!area) break;
-    chain.push(area);
-    id = area.parentId;
-  }
-  return chain;
-}
 
 interface SurveyContext {
   doc: SurveyDocument;
@@ -105,19 +86,14 @@ function analyseRoom(room: DocumentRoom, ctx: SurveyContext): RoomResults {
   if (temp.basis === 'assumed') warnings.push(analysisWarning('room-temperature-assumed', 'info', 'No temperature was read in the room: 20 °C is assumed for the occupants’ CO₂ output.'));
   if (room.occupants.length === 0) warnings.push(analysisWarning('no-occupants', 'info', 'No occupants are recorded, so there are no per-person, steady CO₂ or day-profile figures.'));
 
-  const airflow: RoomAirflowContext = {
-    room,
-    ceilingHeight_m: ceiling,
-    areaChain: areaChain(room.areaId, doc.areas),
-    areaMates: room.areaId === undefined ? [] : doc.rooms.filter((r) => r.areaId === room.areaId && r.id !== room.id).sort((a, b) => (a.id < b.id ? -1 : 1)),
-    site: ctx.site,
-    ceilingOf: (r) => ceilingHeight(r.geometry),
-  };
+  const airflow = roomAirflowContext(room, doc, ctx.site);
 
   // Measured supply.
   const sets = readingSets(room, doc);
   const measurementContext = { room, survey: doc.survey, instruments: doc.instruments, volume_m3: volume, air, asFound, plan, draws: ctx.draws, seed: ctx.seed };
-  const measured = sets.flatMap((set) => measureSet(measurementContext, set));
+  const evaluated = sets.map((set) => measureSet(measurementContext, set));
+  const measured = evaluated.flatMap((e) => e.estimates);
+  for (const e of evaluated) if (e.estimates.length === 0) warnings.push(...e.warnings);
   const best = bestMeasured(measured);
   const boundsFrom = measured.filter((m) => (m.kind === 'upper-bound' || m.kind === 'range') && !m.warnings.some((w) => w.severity === 'error'));
   const maxOf = (xs: (number | null)[]) => (xs.some((x) => x !== null) ? Math.max(...xs.filter((x): x is number => x !== null)) : null);

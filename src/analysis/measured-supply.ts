@@ -88,8 +88,11 @@ function occupantUncertainty(occ: RoomOccupancy): OccupantUncertainty | undefine
   return n > 0 ? { count: n, countSd: 0, perPerson_m3s: occ.figures.output_m3s / n, perPersonRelSd: OUTPUT_RELATIVE_SD } : undefined;
 }
 
-/** Evaluate one set: its estimates (a build-up may give two). */
-export function measureSet(ctx: MeasurementContext, set: ReadingSet): MeasuredEstimate[] {
+/**
+ * Evaluate one set: its estimates (a build-up may give two), and the set's own warnings (which
+ * the estimates also carry; they matter alone when nothing could be fitted).
+ */
+export function measureSet(ctx: MeasurementContext, set: ReadingSet): { estimates: MeasuredEstimate[]; warnings: AnalysisWarning[] } {
   const { room } = ctx;
   const warnings: AnalysisWarning[] = [...set.warnings];
   const meter = meterModel(set.instrumentId, ctx.instruments);
@@ -131,7 +134,7 @@ export function measureSet(ctx: MeasurementContext, set: ReadingSet): MeasuredEs
   } else {
     estimates.push(spotOrNearSteady(ctx, set, common, warnings));
   }
-  return estimates.map((e) => toMeasured(set, e, people.figures, meter.meter, set.instrumentId, warnings, state));
+  return { estimates: estimates.map((e) => toMeasured(set, e, people.figures, meter.meter, set.instrumentId, warnings, state)), warnings };
 }
 
 function spotOrNearSteady(

@@ -18,7 +18,8 @@
 import type { FanInput, FanSystem, RoomAirflowInput } from '../core/airflow-inputs.ts';
 import type { Area } from '../model/area.ts';
 import { roomFloorArea } from '../model/room-geometry.ts';
-import type { DocumentRoom } from '../model/survey-document.ts';
+import type { Geometry } from '../model/room-geometry.ts';
+import type { DocumentRoom, SurveyDocument } from '../model/survey-document.ts';
 import { analysisWarning, type AnalysisWarning } from './analysis-warnings.ts';
 import { crossPathInput } from './cross-path.ts';
 import { openingInputs } from './opening-inputs.ts';
@@ -35,6 +36,36 @@ export interface RoomAirflowContext {
   areaMates: readonly DocumentRoom[];
   site: SiteInputs;
   ceilingOf: (r: DocumentRoom) => number;
+}
+
+/** Floor-to-ceiling height: the tallest part, m. Example: a 7.2 × 7 × 2.9 m box → 2.9. */
+export function ceilingHeight(geometry: Geometry): number {
+  return geometry.kind === 'parts' ? Math.max(...geometry.parts.map((p) => p.height_m)) : geometry.height_m;
+}
+
+/** The room's area and those it sits in, innermost first (a cycle stops the walk). */
+function areaChain(areaId: string | undefined, areas: readonly Area[]): Area[] {
+  const chain: Area[] = [];
+  let id = areaId;
+  while (id !== undefined && !chain.some((a) => a.id === id)) {
+    const area = areas.find((a) => a.id === id);
+    if (!area) break;
+    chain.push(area);
+    id = area.parentId;
+  }
+  return chain;
+}
+
+/** What every state of a room in a survey shares (area mates sorted by id). */
+export function roomAirflowContext(room: DocumentRoom, doc: SurveyDocument, site: SiteInputs): RoomAirflowContext {
+  return {
+    room,
+    ceilingHeight_m: ceilingHeight(room.geometry),
+    areaChain: areaChain(room.areaId, doc.areas),
+    areaMates: room.areaId === undefined ? [] : doc.rooms.filter((r) => r.areaId === room.areaId && r.id !== room.id).sort((a, b) => (a.id < b.id ? -1 : 1)),
+    site,
+    ceilingOf: (r) => ceilingHeight(r.geometry),
+  };
 }
 
 /** Exposed envelope (m²) and whether a wall length was assumed. */
