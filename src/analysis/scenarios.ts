@@ -199,10 +199,19 @@ function profileFor(
 export function roomScenarios(inputs: ScenarioInputs): { scenarios: ScenarioResult[]; warnings: AnalysisWarning[] } {
   const warnings: AnalysisWarning[] = [];
   const predictions = new Map<Exclude<ScenarioId, 'design-occupancy'>, RoomSupplyPrediction[]>();
+  // Scenarios often share a state (closed = vents open when there are no vents): predict each state once.
+  const byState = new Map<string, RoomSupplyPrediction[]>();
   for (const [id, state] of Object.entries(inputs.states) as [Exclude<ScenarioId, 'design-occupancy'>, RoomState][]) {
-    const { input, warnings: mapped } = inputs.airflowInput(state);
-    warnings.push(...mapped);
-    predictions.set(id, predictRoomSupplyOverCases(input, inputs.cases).predictions);
+    const { assumptions: _, ...summary } = summariseState(state);
+    const key = JSON.stringify(summary);
+    let predicted = byState.get(key);
+    if (!predicted) {
+      const { input, warnings: mapped } = inputs.airflowInput(state);
+      warnings.push(...mapped);
+      predicted = predictRoomSupplyOverCases(input, inputs.cases).predictions;
+      byState.set(key, predicted);
+    }
+    predictions.set(id, predicted);
   }
   const ids: ScenarioId[] = ['as-found', 'closed', 'vents-open', 'windows-open', 'design-occupancy'];
   const supplies = new Map<ScenarioId, Figure[]>();
@@ -211,6 +220,7 @@ export function roomScenarios(inputs: ScenarioInputs): { scenarios: ScenarioResu
     const own = predictions.get(id === 'design-occupancy' ? 'as-found' : id)!;
     supplies.set(id, own.map((p, k) => supplyFigure(id, p.outdoorAir, asFoundPredictions[k]!.outdoorAir, inputs)));
   }
+  const profiles = new Map<string, ProfileFigures>();
   const scenarios = ids.map((id): ScenarioResult => {
     const own = predictions.get(id === 'design-occupancy' ? 'as-found' : id)!;
     const occupancy = id === 'design-occupancy' ? inputs.design : inputs.asFound;
@@ -229,16 +239,14 @@ export function roomScenarios(inputs: ScenarioInputs): { scenarios: ScenarioResu
       const [bv, bl, bp] = rank(worst);
       if (av < bv || (av === bv && (al < bl || (al === bl && ap < bp)))) worst = k;
     }
-    const profile =
-      inputs.plan && occupancy.figures.count > 0
-        ? profileFor(
-            inputs.plan,
-            occupancy.groups,
-            { occupied: figures[worst]!, empty: supplies.get('closed')![worst]!, airing: supplies.get('windows-open')![worst]! },
-            cases[worst]!.weatherId,
-            inputs,
-          )
-        : null;
+    let profile: ProfileFigures | null = null;
+    if (inputs.plan && occupancy.figures.count > 0) {
+      const ends = { occupied: figures[worst]!, empty: supplies.get('closed')![worst]!, airing: supplies.get('windows-open')![worst]! };
+      // Scenarios with the same supplies and people have the same day: work it out once.
+      const key = JSON.stringify([occupancy.figures.groups, cases[worst]!.weatherId, ends]);
+      profile = profiles.get(key) ?? profileFor(inputs.plan, occupancy.groups, ends, cases[worst]!.weatherId, inputs);
+      profiles.set(key, profile);
+    }
     const stateKey = id === 'design-occupancy' ? 'as-found' : id;
     return {
       id,
