@@ -29,7 +29,7 @@ import { outdoorFor } from './meter-inputs.ts';
 import { asFoundCounts, designCounts, occupancyOf, roomAir, roomTemperature } from './occupancy-inputs.ts';
 import { readingSets } from './reading-sets.ts';
 import { reconcile } from './reconcile.ts';
-import type { AnalysisResults, Figure, RoomHeadline, RoomResults } from './results.ts';
+import type { AnalysisResults, RoomHeadline, RoomResults } from './results.ts';
 import { ceilingHeight, exposedEnvelope, roomAirflowContext, roomAirflowInput } from './room-airflow-input.ts';
 import { closedState, stateFromConditions, ventsOpenState, windowsOpenState, type RoomState } from './room-state.ts';
 import { roomScenarios } from './scenarios.ts';

@@ -20,8 +20,6 @@ export type WarningSeverity = 'info' | 'caution' | 'error';
 export type AnalysisWarningCode =
   | 'combustion-readings-excluded'
   | 'people-during-decay'
-  | 'people-changed-during-test'
-  | 'conditions-changed-during-test'
   | 'instrument-not-recorded'
   | 'instrument-accuracy-assumed'
   | 'mixed-instruments'
@@ -40,7 +38,6 @@ export type AnalysisWarningCode =
   | 'no-occupants'
   | 'no-measurement'
   | 'measurement-not-usable'
-  | 'measured-bound-only'
   | 'disagrees-with-prediction'
   | 'terminal-at-boost'
   | 'system-state-unknown'

@@ -30,6 +30,7 @@
  * Example: Classroom B1 has a decay (tier 1) and a build-up (tier 2): the decay is the best.
  */
 import { fitBuildUpKnownOutput, fitBuildUpRateAndLevel } from '../core/build-up-fit.ts';
+import type { AirState } from '../core/co2-generation.ts';
 import { estimateBuildUpTwoPoint, estimateSpotReading } from '../core/build-up-two-point.ts';
 import { fitDecay } from '../core/decay-fit.ts';
 import { estimateNearSteady } from '../core/near-steady-level.ts';
@@ -45,7 +46,6 @@ import { OUTPUT_RELATIVE_SD, occupancyOf, presentCounts, type RoomOccupancy } fr
 import type { ReadingSet } from './reading-sets.ts';
 import type { MeasuredEstimate, OccupancyFigures, Ranged } from './results.ts';
 import { stateFromConditions, summariseState, type RoomState } from './room-state.ts';
-import type { AirState } from '../core/co2-generation.ts';
 
 /** Relative standard uncertainty of a measured room volume (see the file note). */
 export const VOLUME_RELATIVE_SD = 0.05;
