@@ -27,11 +27,15 @@ export function supplyBetweenLevels(x: TrueInputs, start_ppm: number, end_ppm: n
   const sealedEnd = start_ppm + (PPM_PER_VOLUME_FRACTION * source * duration_s) / x.volume_m3;
   if (end_ppm >= sealedEnd) return 'above-sealed';
   if (end_ppm <= x.outdoor_ppm) return 'below-outdoor';
+  // One conditions object, updated in place: Monte Carlo calls this a thousand times per reading.
   const conditions = { volume_m3: x.volume_m3, supply_m3s: 0, outdoor_ppm: x.outdoor_ppm, source_m3s: source };
-  const gap = (lnRate: number): number =>
-    levelAfter({ ...conditions, supply_m3s: Math.exp(lnRate) * x.volume_m3 }, start_ppm, duration_s) - end_ppm;
-  // From almost sealed (λT = 1e-9) to a room at its steady level within e^(−60).
-  const root = findRootInBracket(gap, Math.log(1e-9 / duration_s), Math.log(60 / duration_s), 1e-12);
+  const gap = (lnRate: number): number => {
+    conditions.supply_m3s = Math.exp(lnRate) * x.volume_m3;
+    return levelAfter(conditions, start_ppm, duration_s) - end_ppm;
+  };
+  // From almost sealed (λT = 1e-9) to a room at its steady level within e^(−60). A tolerance of
+  // 1e-9 in ln(rate) is a relative 1e-9 in supply, far inside any interval the draws give.
+  const root = findRootInBracket(gap, Math.log(1e-9 / duration_s), Math.log(60 / duration_s), 1e-9);
   return root === null ? 'below-outdoor' : Math.exp(root) * x.volume_m3;
 }
 
