@@ -4,6 +4,7 @@
  * Returns the saved survey, or the problems with what was typed (nothing is saved then).
  */
 import { newSurveyInputSchema, type NewSurveyInput, type Survey } from '../model/survey.ts';
+import { newSurveyRecord } from '../model/survey-defaults.ts';
 import { validationProblems, type ValidationProblem } from '../model/validation-problem.ts';
 import { saveSurvey } from '../store/surveys.ts';
 import { connection } from './storage-connection.ts';
@@ -14,13 +15,7 @@ export type NewSurveyResult = { ok: true; survey: Survey } | { ok: false; proble
 export async function startSurvey(input: NewSurveyInput, now: Date = new Date()): Promise<NewSurveyResult> {
   const parsed = newSurveyInputSchema.safeParse(input);
   if (!parsed.success) return { ok: false, problems: validationProblems(parsed.error) };
-  const stamp = now.toISOString();
-  const survey = await saveSurvey(connection, {
-    ...parsed.data,
-    id: crypto.randomUUID(),
-    createdAt: stamp,
-    updatedAt: stamp,
-  });
+  const survey = await saveSurvey(connection, newSurveyRecord(parsed.data, crypto.randomUUID(), now.toISOString()));
   void deviceStatus.requestProtection();
   return { ok: true, survey };
 }

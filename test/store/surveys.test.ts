@@ -3,6 +3,7 @@ import { describe, it, expect, afterEach } from 'vitest';
 import { Connection, StorageError } from '../../src/store/connection.ts';
 import { getSurvey, listSurveys, saveSurvey } from '../../src/store/surveys.ts';
 import type { Survey } from '../../src/model/survey.ts';
+import { newSurveyRecord } from '../../src/model/survey-defaults.ts';
 
 let counter = 0;
 function freshConnection(): Connection {
@@ -11,14 +12,9 @@ function freshConnection(): Connection {
 }
 
 function survey(n: number, updatedAt: string): Survey {
-  return {
-    id: `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`,
-    title: `Invented survey ${n}`,
-    site: 'Larchmere Primary (invented)',
-    buildingUse: 'school',
-    createdAt: '2026-11-30T09:00:00Z',
-    updatedAt,
-  };
+  const id = `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
+  const input = { title: `Invented survey ${n}`, site: 'Larchmere Primary (invented)', buildingUse: 'school' as const };
+  return { ...newSurveyRecord(input, id, '2026-11-30T09:00:00Z'), updatedAt };
 }
 
 const open: Connection[] = [];
