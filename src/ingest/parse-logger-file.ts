@@ -18,8 +18,9 @@
  * 23:01Z on the 26th, British Summer Time), co2_ppm [812, 815], delimiter ';'.
  */
 import Papa from 'papaparse';
+import { fromFahrenheit } from '../core/units.ts';
 import { detectColumns, type ColumnChoice, type ColumnOverrides, type DetectedColumn } from './column-detection.ts';
-import { readDateTimeText, readTimeOfDayText, type DateTimeText } from './date-time-text.ts';
+import { dateTimeColumns, HAS_TIME, readDateTimeInto, readTimeOfDayText, TWELVE_HOUR, type DateTimeColumns } from './date-time-text.ts';
 import { parseDecimalNumber, type DecimalSeparator } from './decimal-number.ts';
 import { detectDecimalSeparator } from './decimal-separator-detection.ts';
 import { detectDelimiter, type Delimiter } from './delimiter-detection.ts';
@@ -233,7 +234,7 @@ function readRows(
       : null;
   const n = dataRows.length;
   const local = new Float64Array(n);
-  const written: Array<DateTimeText | null> = numericKind ? [] : new Array(n);
+  const written = dateTimeColumns(numericKind ? 0 : n);
   const values = valueCols.map((c) => (c === null ? null : new Float64Array(n)));
   const lines = new Uint32Array(n);
   let count = 0;
@@ -251,7 +252,6 @@ function readRows(
       drop(line, `has ${row.length} field${row.length === 1 ? '' : 's'}; at least ${needed} are needed`);
       continue;
     }
-    let parts: DateTimeText | null = null;
     if (numericKind) {
       const v = parseDecimalNumber(timeCell(row), decimal);
       if (!Number.isFinite(v)) {
@@ -259,24 +259,27 @@ function readRows(
         continue;
       }
       local[count] = numericTimeSeconds(numericKind, v);
-    } else if (choice.time.kind === 'single') {
-      parts = readDateTimeText(timeCell(row));
     } else {
-      const d = readDateTimeText(row[choice.time.date] ?? '');
-      const t = readTimeOfDayText(row[choice.time.time] ?? '');
-      parts = d && t && !d.hasTime ? { ...d, seconds: t.seconds, hasTime: true, twelveHour: t.twelveHour } : null;
-    }
-    if (!numericKind) {
-      if (!parts) {
+      let ok: boolean;
+      if (choice.time.kind === 'single') ok = readDateTimeInto(timeCell(row), written, count);
+      else {
+        const clock = readTimeOfDayText(row[choice.time.time] ?? '');
+        ok = clock !== null && readDateTimeInto(row[choice.time.date] ?? '', written, count) && !(written.flags[count]! & HAS_TIME);
+        if (ok) {
+          written.seconds[count] = clock!.seconds;
+          written.flags[count] = HAS_TIME | (clock!.twelveHour ? TWELVE_HOUR : 0);
+        }
+      }
+      if (!ok) {
         const cells = timeCols.map((c) => `"${row[c] ?? ''}"`).join(' ');
         drop(line, `time ${cells} in "${timeCols.map((c) => names[c]).join('" and "')}" is not a date and time`);
         continue;
       }
-      twelveHour ||= parts.twelveHour;
-      offsetInFile ||= !Number.isNaN(parts.offset_s);
-      written[count] = parts;
+      twelveHour ||= (written.flags[count]! & TWELVE_HOUR) !== 0;
+      offsetInFile ||= !Number.isNaN(written.offset_s[count]!);
     }
-    for (const [k, c] of valueCols.entries()) {
+    for (let k = 0; k < 3; k++) {
+      const c = valueCols[k]!;
       if (c === null) continue;
       const cell = row[c] ?? '';
       const v = parseDecimalNumber(cell, decimal);
@@ -296,8 +299,7 @@ function readRows(
   let order: DateOrder | null = null;
   let orderFrom: DetectedTimeFormat['orderFrom'] = null;
   if (!numericKind) {
-    const dates = written.slice(0, count) as DateTimeText[];
-    const resolved = resolveDateOrder(dates, options.dateOrder);
+    const resolved = resolveDateOrder(written, count, options.dateOrder);
     if (resolved.status === 'inconsistent') {
       return {
         status: 'failed',
@@ -307,7 +309,7 @@ function readRows(
         report,
       };
     }
-    if (resolved.status === 'ambiguous') return { status: 'ask', question: dateOrderQuestion(dates, lines, timeCols, rows), report };
+    if (resolved.status === 'ambiguous') return { status: 'ask', question: dateOrderQuestion(written, lines, timeCols, rows), report };
     order = resolved.order;
     orderFrom = resolved.how;
     if (resolved.how === 'sequence') {
@@ -331,6 +333,8 @@ function readRows(
   let previous = -Infinity;
   let kept = 0;
   const keep = new Uint8Array(count);
+  let lastDate: [number, number, number] = [NaN, NaN, NaN];
+  let lastDay = NaN;
   for (let i = 0; i < count; i++) {
     let utc: number;
     if (numericKind === 'epoch-seconds' || numericKind === 'epoch-milliseconds') utc = local[i]!;
@@ -338,9 +342,13 @@ function readRows(
       let localSeconds = local[i]!;
       let offset = NaN;
       if (!numericKind) {
-        const p = written[i]!;
-        localSeconds = dayOfDate(p, order!) * 86400 + p.seconds;
-        offset = p.offset_s;
+        // Consecutive rows mostly share a date: reuse its day number.
+        if (written.first[i] !== lastDate[0] || written.second[i] !== lastDate[1] || written.third[i] !== lastDate[2]) {
+          lastDate = [written.first[i]!, written.second[i]!, written.third[i]!];
+          lastDay = dayOfDate(lastDate[0], lastDate[1], lastDate[2], order!);
+        }
+        localSeconds = lastDay * 86400 + written.seconds[i]!;
+        offset = written.offset_s[i]!;
       }
       if (Number.isNaN(localSeconds)) {
         drop(lines[i]!, `date "${rows[lines[i]! - 1]![timeCols[0]!]}" does not exist as ${dateOrderLabel(order ?? 'year-first')}`);
@@ -387,7 +395,7 @@ function readRows(
   }
   const [co2, temp, rh] = ordered.columns.values as [Float64Array | null, Float64Array | null, Float64Array | null];
   if (temp && choice.temperatureUnit === 'F') {
-    for (let i = 0; i < temp.length; i++) temp[i] = ((temp[i]! - 32) * 5) / 9;
+    for (let i = 0; i < temp.length; i++) temp[i] = fromFahrenheit(temp[i]!);
     report.warnings.push(ingestWarning('fahrenheit-converted', 'Temperatures were read in °F and converted to °C.'));
   }
   if (rh && choice.humidityAsFraction) {
@@ -437,16 +445,19 @@ function orderingNotes(report: ImportReport): void {
   }
 }
 
-function dateOrderQuestion(dates: readonly DateTimeText[], lines: Uint32Array, timeCols: readonly number[], rows: readonly string[][]): DateOrderQuestion {
-  const show = (day: number) => (Number.isNaN(day) ? 'no such date' : new Date(day * 86400_000).toISOString().slice(0, 10));
+function dateOrderQuestion(dates: DateTimeColumns, lines: Uint32Array, timeCols: readonly number[], rows: readonly string[][]): DateOrderQuestion {
+  const show = (i: number, order: DateOrder) => {
+    const day = dayOfDate(dates.first[i]!, dates.second[i]!, dates.third[i]!, order);
+    return Number.isNaN(day) ? 'no such date' : new Date(day * 86400_000).toISOString().slice(0, 10);
+  };
   return {
     kind: 'date-order',
     message: 'Every date could be read day-first or month-first. Which does the logger write?',
-    examples: dates.slice(0, 3).map((d, i) => ({
+    examples: [0, 1, 2].filter((i) => i < lines.length && lines[i]! > 0).map((i) => ({
       line: lines[i]!,
       written: timeCols.map((c) => rows[lines[i]! - 1]![c]).join(' '),
-      dayFirst: show(dayOfDate(d, 'day-first')),
-      monthFirst: show(dayOfDate(d, 'month-first')),
+      dayFirst: show(i, 'day-first'),
+      monthFirst: show(i, 'month-first'),
     })),
   };
 }

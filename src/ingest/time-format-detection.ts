@@ -8,11 +8,11 @@
  *   (a logger's readings run on from day to day, not month to month) is taken, with a note;
  * - otherwise it is ambiguous and the surveyor is asked.
  *
- * Example: resolveDateOrder([{ first: 27, second: 10, third: 2024, firstDigits: 2 }]) =
+ * Example: resolveDateOrder over one row written '27/10/2024' =
  * { status: 'resolved', order: 'day-first', how: 'values' }.
  */
 import { calendarDay } from './calendar-day.ts';
-import type { DateTimeText } from './date-time-text.ts';
+import type { DateTimeColumns } from './date-time-text.ts';
 
 export type DateOrder = 'year-first' | 'day-first' | 'month-first';
 export type NumericTimeKind = 'epoch-seconds' | 'epoch-milliseconds' | 'spreadsheet-days';
@@ -59,31 +59,31 @@ export type DateOrderResolution =
   | { status: 'ambiguous' }
   | { status: 'inconsistent' };
 
-type DateParts = Pick<DateTimeText, 'first' | 'second' | 'third' | 'firstDigits'>;
-
 /** Day number of written date parts in a given order (NaN if no such date). */
-export function dayOfDate(d: DateParts, order: DateOrder): number {
-  if (order === 'year-first') return calendarDay(d.first, d.second, d.third);
-  if (order === 'day-first') return calendarDay(d.third, d.second, d.first);
-  return calendarDay(d.third, d.first, d.second);
+export function dayOfDate(first: number, second: number, third: number, order: DateOrder): number {
+  if (order === 'year-first') return calendarDay(first, second, third);
+  if (order === 'day-first') return calendarDay(third, second, first);
+  return calendarDay(third, first, second);
 }
 
-/** Settle the date order over a whole column of written dates. */
-export function resolveDateOrder(dates: readonly DateParts[], given?: DateOrder): DateOrderResolution {
+/** Settle the date order over the first `count` rows of a column of written dates. */
+export function resolveDateOrder(dates: DateTimeColumns, count: number, given?: DateOrder): DateOrderResolution {
   if (given) return { status: 'resolved', order: given, how: 'given' };
-  if (dates.length > 0 && dates.every((d) => d.firstDigits === 4)) return { status: 'resolved', order: 'year-first', how: 'year-first' };
+  let yearFirst = count > 0;
   let firstHigh = false;
   let secondHigh = false;
-  for (const d of dates) {
-    if (d.first > 12) firstHigh = true;
-    if (d.second > 12) secondHigh = true;
+  for (let i = 0; i < count; i++) {
+    if (dates.firstDigits[i] !== 4) yearFirst = false;
+    if (dates.first[i]! > 12) firstHigh = true;
+    if (dates.second[i]! > 12) secondHigh = true;
   }
+  if (yearFirst) return { status: 'resolved', order: 'year-first', how: 'year-first' };
   if (firstHigh && secondHigh) return { status: 'inconsistent' };
   if (firstHigh) return { status: 'resolved', order: 'day-first', how: 'values' };
   if (secondHigh) return { status: 'resolved', order: 'month-first', how: 'values' };
   const spread = (order: DateOrder) => {
     const days = new Set<number>();
-    for (const d of dates) days.add(dayOfDate(d, order));
+    for (let i = 0; i < count; i++) days.add(dayOfDate(dates.first[i]!, dates.second[i]!, dates.third[i]!, order));
     let lo = Infinity;
     let hi = -Infinity;
     for (const day of days) {
@@ -100,7 +100,7 @@ export function resolveDateOrder(dates: readonly DateParts[], given?: DateOrder)
   return { status: 'ambiguous' };
 }
 
-/** A label for the report, e.g. "day-first dates (27/10/2024) with 12-hour clock times". */
+/** A label for the report, e.g. "day-first dates (27/10/2024)". */
 export function dateOrderLabel(order: DateOrder): string {
   return order === 'year-first' ? 'year-first dates (2024-10-27)' : order === 'day-first' ? 'day-first dates (27/10/2024)' : 'month-first dates (10/27/2024)';
 }

@@ -7,7 +7,8 @@
  * possible, so a logger that writes 01:59 then 01:00 again moves on in time; a skipped time
  * is read with the offset in force before the change.
  *
- * Offsets are cached per hour of UTC, so 100,000 readings cost a few hundred Intl calls.
+ * Offsets are cached per hour (of UTC, and of local time for the conversion), so 100,000
+ * readings cost a few hundred Intl calls.
  *
  * Example: zoneClock('Europe/London')!.toUtc(Date.UTC(2024, 9, 27, 1, 30) / 1000, -Infinity)
  * = { utc_s: 1729989000 (00:30Z, the first 01:30), kind: 'repeated' }.
@@ -64,7 +65,7 @@ export function zoneClock(zone: string): ZoneClock | null {
     }
     return Number.isNaN(cached) ? exact(utc_s) : cached;
   };
-  const toUtc = (local_s: number, previous_s: number): { utc_s: number; kind: LocalTimeKind } => {
+  const resolve = (local_s: number, previous_s: number): { utc_s: number; kind: LocalTimeKind } => {
     // The offsets in force a day either side cover any one change (zones change at most twice a year).
     const before = offsetAt(local_s - 86400);
     const after = offsetAt(local_s + 86400);
@@ -77,6 +78,23 @@ export function zoneClock(zone: string): ZoneClock | null {
     if (candidates.length === 1 || candidates[0] === candidates[1]) return { utc_s: candidates[0]!, kind: 'ok' };
     const [early, late] = candidates[0]! < candidates[1]! ? [candidates[0]!, candidates[1]!] : [candidates[1]!, candidates[0]!];
     return { utc_s: early > previous_s ? early : late, kind: 'repeated' };
+  };
+  // Local hours wholly on one offset: NaN marks an hour that holds a change.
+  const localHours = new Map<number, number>();
+  let lastHour = NaN;
+  let lastOffset = NaN;
+  const toUtc = (local_s: number, previous_s: number): { utc_s: number; kind: LocalTimeKind } => {
+    const hour = Math.floor(local_s / 3600);
+    let offset = hour === lastHour ? lastOffset : localHours.get(hour);
+    if (offset === undefined) {
+      const a = resolve(hour * 3600, -Infinity);
+      const b = resolve(hour * 3600 + 3599, -Infinity);
+      offset = a.kind === 'ok' && b.kind === 'ok' && hour * 3600 - a.utc_s === hour * 3600 + 3599 - b.utc_s ? hour * 3600 - a.utc_s : NaN;
+      localHours.set(hour, offset);
+    }
+    lastHour = hour;
+    lastOffset = offset;
+    return Number.isNaN(offset) ? resolve(local_s, previous_s) : { utc_s: local_s - offset, kind: 'ok' };
   };
   return { zone: format.resolvedOptions().timeZone, offsetAt, toUtc };
 }
