@@ -1,8 +1,8 @@
 /**
  * Text from the bytes of a logger file. A byte-order mark decides UTF-8 or UTF-16; without one
  * the bytes are read as UTF-8 when they are valid UTF-8, otherwise as Windows-1252 (the usual
- * single-byte encoding of older exports, where ° is one byte). Bytes with many NULs and no
- * UTF-16 mark are not text.
+ * single-byte encoding of older exports, where ° is one byte). Every other byte NUL is UTF-16
+ * without a mark; any other NUL means the file is not text.
  *
  * Example: decodeFileBytes(Uint8Array.of(0x32, 0x31, 0xb0, 0x43)) = { ok: true, text: '21°C', encoding: 'windows-1252' }.
  */
@@ -17,11 +17,12 @@ export function decodeFileBytes(bytes: Uint8Array): DecodedText {
   const sample = bytes.subarray(0, 4096);
   let nul = 0;
   for (const b of sample) if (b === 0) nul++;
-  if (nul > 0 && nul >= sample.length / 4) {
-    // UTF-16 without a mark: every other byte NUL for ASCII text.
+  if (nul > 0 && nul >= sample.length * 0.4) {
+    // UTF-16 without a mark: every other byte NUL for ASCII text, all on the same side.
     let evenNul = 0;
     for (let i = 0; i < sample.length; i += 2) if (sample[i] === 0) evenNul++;
-    return decoded(bytes, evenNul > nul / 2 ? 'utf-16be' : 'utf-16le');
+    if (evenNul >= 0.9 * nul) return decoded(bytes, 'utf-16be');
+    if (evenNul <= 0.1 * nul) return decoded(bytes, 'utf-16le');
   }
   if (nul > 0) {
     return { ok: false, error: ingestWarning('not-text', 'The file holds binary data, not text: export the logger’s readings as a CSV or text file.') };

@@ -14,7 +14,8 @@
  *    max(8 × noise, 60 ppm). Plateau wobbles and brief dips stay inside the plateau, so no decay
  *    is found inside an occupied plateau.
  * 4. A decay starts where the level leaves the top (the last point within max(2 × noise, 3 % of
- *    the fall) of it) and ends where it reaches within 5 % of the fall of the bottom, or where the
+ *    the fall) of it, then placed on the readings by a two-line change point, corner-refinement.ts)
+ *    and ends where it reaches within 5 % of the fall of the bottom, or where the
  *    next rise begins if it is cut short. A build-up starts where the level leaves the bottom
  *    and ends within 5 % of the rise of the top; the rest up to the next decay, when 30 minutes
  *    or longer, is a near-steady plateau.
@@ -31,6 +32,7 @@
  * (cut at 13:00) and from 15:30 (into the night).
  */
 import { ingestWarning, type IngestWarning } from './ingest-warnings.ts';
+import { refineCorner } from './corner-refinement.ts';
 import { rollingMedian } from './rolling-median.ts';
 
 export type PeriodKind = 'decay' | 'build-up' | 'steady' | 'excluded';
@@ -193,7 +195,11 @@ export function findPeriods(times: Float64Array, co2: Float64Array, options: Per
   const baseline = options.outdoor_ppm ?? percentile(smoothed, 0.02);
   const delta = Math.max(8 * noise, 60);
   const found: FoundPeriod[] = [];
-  for (const block of blocks) if (block.length >= 5) found.push(...blockPeriods(block, times, smoothed, noise, baseline, delta));
+  const corner = (at: number, block: Uint32Array) => {
+    const k = block.indexOf(at);
+    return refineCorner(times, co2, usable, block[Math.max(0, k - 2 * half)]!, block[Math.min(block.length - 1, k + 2 * half)]!, at);
+  };
+  for (const block of blocks) if (block.length >= 5) found.push(...blockPeriods(block, times, smoothed, noise, baseline, delta, (at) => corner(at, block)));
 
   // 5. Combustion and occupancy checks on rises.
   flagRises(found, times, smoothed, half, options);
@@ -241,7 +247,20 @@ function turningPoints(s: (k: number) => number, length: number, baseline: numbe
   return all;
 }
 
-function blockPeriods(block: Uint32Array, times: Float64Array, smoothed: Float64Array, noise: number, baseline: number, delta: number): FoundPeriod[] {
+function blockPeriods(
+  block: Uint32Array,
+  times: Float64Array,
+  smoothed: Float64Array,
+  noise: number,
+  baseline: number,
+  delta: number,
+  corner: (seriesIndex: number) => number,
+): FoundPeriod[] {
+  // A sharp corner placed on the readings, as a position in the block (kept inside [lo, hi]).
+  const sharpen = (k: number, lo: number, hi: number) => {
+    const i = block.indexOf(corner(block[k]!));
+    return i < 0 ? k : Math.min(hi, Math.max(lo, i));
+  };
   const s = (k: number) => smoothed[block[k]!]!;
   const t = (k: number) => times[block[k]!]!;
   const turns = turningPoints(s, block.length, baseline, delta);
@@ -267,9 +286,11 @@ function blockPeriods(block: Uint32Array, times: Float64Array, smoothed: Float64
       // Fall: decay.
       let start = a.at;
       for (let k = a.at; k <= b.at; k++) if (s(k) >= s(a.at) - edge) start = k;
+      start = sharpen(start, a.at, b.at);
       const cutShort = s(b.at) - baseline > 0.2 * (s(a.at) - baseline) && b.at < block.length - 1;
       let end = b.at;
-      if (!cutShort) for (let k = start; k <= b.at; k++) if (s(k) <= s(b.at) + near) { end = k; break; }
+      if (cutShort) end = sharpen(b.at, start, block.length - 1);
+      else for (let k = start; k <= b.at; k++) if (s(k) <= s(b.at) + near) { end = k; break; }
       if (plateauFrom !== null && t(start) - t(plateauFrom) >= MIN_PLATEAU_S) {
         out.push(make('steady', plateauFrom, start, `Level held near ${Math.round(s(start))} ppm.`));
       }
@@ -279,6 +300,7 @@ function blockPeriods(block: Uint32Array, times: Float64Array, smoothed: Float64
       // Rise: build-up, then perhaps a plateau.
       let start = a.at;
       for (let k = a.at; k <= b.at; k++) if (s(k) <= s(a.at) + edge) start = k;
+      start = sharpen(start, Math.max(0, a.at - 1), b.at);
       let end = b.at;
       for (let k = start; k <= b.at; k++) if (s(k) >= s(b.at) - near) { end = k; break; }
       if (end > start) out.push(make('build-up', start, end, `Rose from ${Math.round(s(start))} to ${Math.round(s(end))} ppm.`));
