@@ -294,6 +294,11 @@ function readRows(
     count++;
   }
   report.rowsRead = dataRows.length;
+  if (count === 0) {
+    const first = report.malformed[0];
+    const why = first ? ` The first, line ${first.line}, ${first.problem}.` : '';
+    return { status: 'failed', error: ingestWarning('unreadable-times', `No data row had a readable time and values.${why}`, first ? { line: first.line } : {}), report };
+  }
   if (missing > 0) report.warnings.push(ingestWarning('missing-value', `${missing} empty cell(s) in the chosen columns are left as gaps.`));
 
   let order: DateOrder | null = null;

@@ -35,19 +35,26 @@ export interface VapourExcessByDay {
 /** Outdoor readings further than this from an inside reading are not paired with it, s (our own choice). */
 const PAIRING_LIMIT_S = 3600;
 
-/** Linear interpolation of a sorted series at t; NaN outside it or across a gap over the limit. */
+/**
+ * The outdoor value at t: linear between the readings either side; the nearest reading at the
+ * ends or across a long gap, when within the pairing limit; NaN otherwise. `from` is where the
+ * search starts (inside times rise, so the search only moves on).
+ */
 function interpolate(times: Float64Array, values: Float64Array, t: number, from: number): { value: number; at: number } {
   let k = from;
   while (k + 1 < times.length && times[k + 1]! <= t) k++;
-  if (times[k]! > t || k + 1 >= times.length) {
-    const exact = times[k] === t ? values[k]! : NaN;
-    return { value: exact, at: k };
+  const before = times[k]! <= t ? k : -1;
+  const after = before < 0 ? k : k + 1 < times.length ? k + 1 : -1;
+  if (before >= 0 && after >= 0) {
+    const [t0, t1] = [times[before]!, times[after]!];
+    if (t - t0 <= PAIRING_LIMIT_S || t1 - t <= PAIRING_LIMIT_S) {
+      const w = (t - t0) / (t1 - t0);
+      return { value: values[before]! * (1 - w) + values[after]! * w, at: k };
+    }
+    return { value: NaN, at: k };
   }
-  const t0 = times[k]!;
-  const t1 = times[k + 1]!;
-  if (t - t0 > PAIRING_LIMIT_S && t1 - t > PAIRING_LIMIT_S) return { value: NaN, at: k };
-  const w = (t - t0) / (t1 - t0);
-  return { value: values[k]! * (1 - w) + values[k + 1]! * w, at: k };
+  const near = before >= 0 ? before : after;
+  return { value: near >= 0 && Math.abs(times[near]! - t) <= PAIRING_LIMIT_S ? values[near]! : NaN, at: k };
 }
 
 export function vapourExcessByDay(inside: HumiditySeries, outdoor: OutdoorHumidity, timeZone: string, expectedClass?: HumidityClass): VapourExcessByDay | { error: IngestWarning } {
