@@ -89,7 +89,7 @@ function toReading(meter: MeterErrorModel, level: number): number {
 export function fitPeriods(times: Float64Array, co2: Float64Array, finding: PeriodFinding, options: FitOptions = {}): FittedPeriod[] {
   const { uncertainty, volumeKnown } = fitUncertainty(options, finding.noise_ppm);
   const overlapsExclusion = (p: FoundPeriod) =>
-    finding.periods.some((e) => e.kind === 'excluded' && (e.exclusion === 'caller' || e.exclusion === 'combustion') && e.start_s < p.end_s && p.start_s < e.end_s);
+    finding.periods.some((e) => e.exclusion === 'caller' && e.start_s < p.end_s && p.start_s < e.end_s);
   return finding.periods.map((p, index) => {
     if (p.kind === 'excluded') return { ...p, fit: null, fitPoints: 0, curve: null, suggestion: { accept: false, reason: p.note } };
     const warnings: IngestWarning[] = [...p.warnings];

@@ -36,7 +36,7 @@ import { refineCorner } from './corner-refinement.ts';
 import { rollingMedian } from './rolling-median.ts';
 
 export type PeriodKind = 'decay' | 'build-up' | 'steady' | 'excluded';
-export type ExclusionReason = 'gap' | 'door-open' | 'combustion' | 'caller';
+export type ExclusionReason = 'gap' | 'door-open' | 'caller';
 
 /** A window of time, s (epoch UTC), with a reason where it is an exclusion. */
 export interface TimeWindow {
@@ -208,9 +208,8 @@ export function findPeriods(times: Float64Array, co2: Float64Array, options: Per
   return { periods, usable, smoothed, noise_ppm: noise, baseline_ppm: baseline, step_s: step };
 }
 
-function excluded(reason: ExclusionReason, first: number, last: number, times: Float64Array, note: string): FoundPeriod {
-  const code = reason === 'gap' ? 'gap' : reason === 'door-open' ? 'door-open' : 'combustion-suspected';
-  return { kind: 'excluded', exclusion: reason, start_s: times[first]!, end_s: times[last]!, first, last, note, warnings: [ingestWarning(code, note)] };
+function excluded(reason: 'gap' | 'door-open', first: number, last: number, times: Float64Array, note: string): FoundPeriod {
+  return { kind: 'excluded', exclusion: reason, start_s: times[first]!, end_s: times[last]!, first, last, note, warnings: [ingestWarning(reason, note)] };
 }
 
 interface Turn {

@@ -9,21 +9,11 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { loggerCommand, type CommandIo } from '../../src/cli/logger-command.ts';
 import { parseArguments } from '../../src/cli/arguments.ts';
-import { schoolDays, simulateRoom, writeLoggerFile } from '../support/logger-records.ts';
+import { schoolRoom, writeLoggerFile } from '../support/logger-records.ts';
 
 const DAY0 = Date.UTC(2024, 10, 4) / 1000;
 const text = writeLoggerFile(
-  simulateRoom({
-    start_s: DAY0,
-    step_s: 60,
-    count: 2880,
-    volume_m3: 120,
-    outdoor_ppm: 420,
-    perPerson_m3s: 4.5e-6,
-    timetable: schoolDays([DAY0, DAY0 + 86400], { people: 25, occupiedSupply_m3s: 0.07, emptySupply_m3s: 0.015 }),
-    meter: { offset_ppm: 0, gain: 1, noise_ppm: 6 },
-    seed: 9,
-  }),
+  schoolRoom({ start_s: DAY0, days: 2, step_s: 60, volume_m3: 120, people: 25, occupiedSupply_m3s: 0.07, emptySupply_m3s: 0.015, seed: 9 }),
   { delimiter: ';', decimalComma: true, preamble: ['Invented export'], writing: 'day-first', zone: 'Europe/London' },
 );
 

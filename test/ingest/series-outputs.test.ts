@@ -11,20 +11,10 @@ import { loggerChartData } from '../../src/ingest/logger-chart-data.ts';
 import { loggerSeriesSchema } from '../../src/model/logger-series.ts';
 import { timeChart } from '../../src/chart/time-chart.ts';
 import { approxEqual } from '../support/approx-equal.ts';
-import { schoolDays, simulateRoom, writeLoggerFile } from '../support/logger-records.ts';
+import { schoolRoom, writeLoggerFile } from '../support/logger-records.ts';
 
 const DAY0 = Date.UTC(2024, 0, 8) / 1000;
-const record = simulateRoom({
-  start_s: DAY0,
-  step_s: 120,
-  count: 2 * 720,
-  volume_m3: 60,
-  outdoor_ppm: 420,
-  perPerson_m3s: 4.5e-6,
-  timetable: schoolDays([DAY0, DAY0 + 86400], { people: 10, occupiedSupply_m3s: 0.03, emptySupply_m3s: 0.01 }),
-  meter: { offset_ppm: 0, gain: 1, noise_ppm: 6 },
-  seed: 5,
-});
+const record = schoolRoom({ start_s: DAY0, days: 2, step_s: 120, volume_m3: 60, people: 10, occupiedSupply_m3s: 0.03, emptySupply_m3s: 0.01, seed: 5 });
 const text = writeLoggerFile(record, { delimiter: ',', writing: 'iso-local', zone: 'Europe/London' });
 const analysis = analyseLoggerFile(text, { timeZone: 'Europe/London', volume_m3: 60, outdoor_ppm: 420 });
 if (analysis.status !== 'analysed') throw new Error('not analysed');

@@ -88,6 +88,36 @@ export function schoolDays(dayStarts_s: readonly number[], options: { people: nu
   return out;
 }
 
+/**
+ * An invented school room over whole days: outdoor 420 ppm, 4.5e-6 m³/s of CO2 per pupil
+ * (a seated child or adult, within references.md §1.3's range), an exact meter with 6 ppm noise
+ * unless one is given, pupils on the schoolDays timetable.
+ */
+export function schoolRoom(o: {
+  start_s: number;
+  days: number;
+  step_s: number;
+  volume_m3: number;
+  people: number;
+  occupiedSupply_m3s: number;
+  emptySupply_m3s: number;
+  seed: number;
+  meter?: RoomRecordSpec['meter'];
+}): RoomRecord {
+  const dayStarts = Array.from({ length: o.days + 1 }, (_, k) => o.start_s + k * 86400);
+  return simulateRoom({
+    start_s: o.start_s,
+    step_s: o.step_s,
+    count: Math.round((o.days * 86400) / o.step_s),
+    volume_m3: o.volume_m3,
+    outdoor_ppm: 420,
+    perPerson_m3s: 4.5e-6,
+    timetable: schoolDays(dayStarts, o),
+    meter: o.meter ?? { offset_ppm: 0, gain: 1, noise_ppm: 6 },
+    seed: o.seed,
+  });
+}
+
 /** Local wall-clock parts of a UTC instant in a zone (test-side, independent of the importer's code path). */
 const formats = new Map<string, Intl.DateTimeFormat>();
 export function localParts(utc_s: number, zone: string): { y: number; mo: number; d: number; h: number; mi: number; s: number } {
