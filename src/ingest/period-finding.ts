@@ -195,11 +195,16 @@ export function findPeriods(times: Float64Array, co2: Float64Array, options: Per
   const baseline = options.outdoor_ppm ?? percentile(smoothed, 0.02);
   const delta = Math.max(8 * noise, 60);
   const found: FoundPeriod[] = [];
-  const corner = (at: number, block: Uint32Array) => {
-    const k = block.indexOf(at);
-    return refineCorner(times, co2, usable, block[Math.max(0, k - 2 * half)]!, block[Math.min(block.length - 1, k + 2 * half)]!, at);
+  // A corner near block position k, placed on the readings (a block position again).
+  const corner = (k: number, block: Uint32Array) => {
+    const lo = Math.max(0, k - 2 * half);
+    const at = refineCorner(times, co2, usable, block[lo]!, block[Math.min(block.length - 1, k + 2 * half)]!, block[k]!);
+    // Block positions rise with series indexes: search only the window.
+    let i = lo;
+    while (i < block.length && block[i]! < at) i++;
+    return i;
   };
-  for (const block of blocks) if (block.length >= 5) found.push(...blockPeriods(block, times, smoothed, noise, baseline, delta, (at) => corner(at, block)));
+  for (const block of blocks) if (block.length >= 5) found.push(...blockPeriods(block, times, smoothed, noise, baseline, delta, (k) => corner(k, block)));
 
   // 5. Combustion and occupancy checks on rises.
   flagRises(found, times, smoothed, half, options);
@@ -253,13 +258,10 @@ function blockPeriods(
   noise: number,
   baseline: number,
   delta: number,
-  corner: (seriesIndex: number) => number,
+  corner: (position: number) => number,
 ): FoundPeriod[] {
-  // A sharp corner placed on the readings, as a position in the block (kept inside [lo, hi]).
-  const sharpen = (k: number, lo: number, hi: number) => {
-    const i = block.indexOf(corner(block[k]!));
-    return i < 0 ? k : Math.min(hi, Math.max(lo, i));
-  };
+  // A sharp corner placed on the readings, kept inside [lo, hi] (block positions).
+  const sharpen = (k: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, corner(k)));
   const s = (k: number) => smoothed[block[k]!]!;
   const t = (k: number) => times[block[k]!]!;
   const turns = turningPoints(s, block.length, baseline, delta);
