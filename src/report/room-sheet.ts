@@ -126,20 +126,21 @@ function dayChart(doc: SurveyDocument, room: DocumentRoom, results: AnalysisResu
   const t0 = Math.min(...times);
   const t1 = Math.max(...times);
   const pad = Math.max(1800, (t1 - t0) * 0.05);
+  const shaded = periods.filter((p) => p.to_s > t0 - pad && p.from_s < t1 + pad);
   return {
     title: `CO2 readings on ${recordedDate(day)}`,
     yLabel: 'CO2 (ppm)',
     series: [{ id: 'readings', label: 'CO2 read in the room', times_s: times, values, style: readings.length > 12 ? 'line' : 'points' }],
     limits,
-    periods: periods.filter((p) => p.to_s > t0 - pad && p.from_s < t1 + pad),
+    periods: shaded,
     timeRange_s: [t0 - pad, t1 + pad],
     yInclude: [results.outdoor.value_ppm],
-    caption: `${readings.length} CO2 reading${readings.length === 1 ? '' : 's'} from ${recordedClock(readings[0]!.time)} to ${recordedClock(readings.at(-1)!.time)}; horizontal lines at ${limits.map((l) => l.label).join(', ')}; shaded: the room's scheduled use.`,
+    caption: `${readings.length} CO2 reading${readings.length === 1 ? '' : 's'} from ${recordedClock(readings[0]!.time)} to ${recordedClock(readings.at(-1)!.time)}; dashed lines at ${limits.map((l) => l.label).join(', ')}${shaded.length ? '; shaded: the room’s scheduled use' : ''}.`,
   };
 }
 
 function moistureLines(room: DocumentRoom, judged: string[] | undefined): string[] {
-  const lines = room.defects.filter((d) => d.kind === 'mould' || d.kind === 'condensation' || d.kind === 'leak').map((d) => `Seen: ${defectWords(d)}.`);
+  const lines = room.defects.filter((d) => d.kind === 'mould' || d.kind === 'condensation' || d.kind === 'leak').map((d) => `Seen: ${defectWords(d).replace(/\.$/, '')}.`);
   const rh = room.readings.filter((r) => r.rh_pct !== undefined);
   if (rh.length) {
     const highest = rh.reduce((a, b) => (b.rh_pct! > a.rh_pct! ? b : a));
