@@ -129,6 +129,8 @@ export interface ReportModel {
   meta: {
     title: string;
     fileName: string;
+    /** The results CSV's name, beside the PDF's. */
+    csvFileName: string;
     reference: string;
     revision: number;
     issueDate: string;
@@ -194,6 +196,7 @@ export function buildReport(doc: SurveyDocument, results: AnalysisResults, optio
     meta: {
       title: survey.title,
       fileName: reportFileName(survey.site || survey.title, firstVisit),
+      csvFileName: reportFileName(survey.site || survey.title, firstVisit, 'csv'),
       reference: options.reference ?? `VW-${survey.id.slice(0, 8)}`,
       revision: survey.revision,
       issueDate: recordedDate(options.issueDate),
