@@ -5,8 +5,8 @@
  * and every row says it is not judged. The order uses the analysis's figures as they are; the
  * printed values are rounded by report-figure.ts.
  *
- * Example: for the demo school, Classroom B3 (predicted, about 2 L/s per person at the low end)
- * ranks before Classroom B1 (measured, about 5 L/s per person).
+ * Example: for the demo school without a judgement, Classroom B2 (predicted, 0.6–2 L/s per person)
+ * ranks before Classroom B3 (measured, 0.9–1.2) and Classroom B1 (measured, 1.7–2.1).
  */
 import type { AnalysisResults, RoomResults } from '../analysis/results.ts';
 import { roomUseLabel, type RoomUse } from '../core/room-uses.ts';
