@@ -5,7 +5,7 @@ import { svelte } from '@sveltejs/vite-plugin-svelte';
 import { VitePWA } from 'vite-plugin-pwa';
 import { readFileSync } from 'node:fs';
 import { manifest } from './src/pwa/manifest.ts';
-import { precacheGlobs, precacheIgnores } from './src/pwa/precache-rule.ts';
+import { optionalChunkName, precacheGlobs, precacheIgnores } from './src/pwa/precache-rule.ts';
 
 const here = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 const pkg = JSON.parse(readFileSync(here('./package.json'), 'utf8')) as { version: string };
@@ -25,6 +25,12 @@ export default defineConfig({
     outDir: here('./dist'),
     emptyOutDir: true,
     sourcemap: false,
+    rollupOptions: {
+      output: {
+        // jspdf's optional chunks carry their package's name, so the precache ignore rule sees them.
+        chunkFileNames: (chunk) => `assets/${optionalChunkName(chunk.facadeModuleId ? [chunk.facadeModuleId] : chunk.moduleIds) ?? '[name]'}-[hash].js`,
+      },
+    },
   },
   preview: { host: '127.0.0.1', port: 4173, strictPort: true },
   server: { host: '127.0.0.1' },

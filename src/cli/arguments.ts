@@ -50,3 +50,11 @@ export function positiveNumber(name: string, text: string): { ok: true; value: n
   const value = Number(text.trim().replace(',', '.'));
   return text.trim() !== '' && Number.isFinite(value) && value > 0 ? { ok: true, value } : { ok: false, message: `--${name} must be a positive number, not "${text}".` };
 }
+
+/**
+ * A whole number of at least 1 from an option's text, or a message naming the option.
+ * Example: wholeNumber('draws', '200') = { ok: true, value: 200 }.
+ */
+export function wholeNumber(name: string, text: string): { ok: true; value: number } | { ok: false; message: string } {
+  return /^\d+$/.test(text.trim()) && Number(text) >= 1 ? { ok: true, value: Number(text) } : { ok: false, message: `--${name} needs a whole number of at least 1, not "${text}".` };
+}

@@ -2,8 +2,8 @@
  * `logger <file> [--json] [--outdoor <ppm>] [--volume <m3>] [--tz <zone>] [--date-order day-first|month-first]`:
  * reads a logger file with the importer (src/ingest), prints the detected layout, columns, time
  * format, what was left out, and each period with its fit and suggestion; `--json` prints the
- * same as JSON (without the readings themselves). Exit 0 when read; 1 for bad arguments; 2 for
- * a file it cannot read (missing, not text, no table, or a date order it must be told).
+ * same as JSON (without the readings themselves). Exit 0 when read; 2 for bad arguments or a
+ * file it cannot read (missing, not text, no table, or a date order it must be told).
  *
  * Example: `npm run cli -- logger room4.csv --volume 150 --outdoor 430 --tz Europe/London`.
  */
@@ -12,19 +12,12 @@ import type { FittedPeriod } from '../ingest/fit-periods.ts';
 import type { ImportReport } from '../ingest/parse-logger-file.ts';
 import { litresPerSecond, perHour } from '../core/units.ts';
 import { parseArguments, positiveNumber } from './arguments.ts';
-
-/** What a command may touch: the file system reader and the two output streams. */
-export interface CommandIo {
-  /** The file's bytes; throws (as Node's readFileSync does) when it cannot be read. */
-  readFile(path: string): Uint8Array;
-  stdout(text: string): void;
-  stderr(text: string): void;
-}
+import { EXIT, type CommandIo } from './command-io.ts';
 
 export const LOGGER_USAGE =
-  'Usage: logger <file> [--json] [--outdoor <ppm>] [--volume <m3>] [--tz <zone>] [--date-order day-first|month-first]';
+  'usage: logger <file> [--json] [--outdoor <ppm>] [--volume <m3>] [--tz <zone>] [--date-order day-first|month-first]';
 
-export function loggerCommand(argv: readonly string[], io: CommandIo): number {
+export async function runLoggerCommand(argv: readonly string[], io: CommandIo): Promise<number> {
   const args = parseArguments(argv, { flags: ['json'], options: ['outdoor', 'volume', 'tz', 'date-order'] });
   if (!args.ok) return usageError(io, args.message);
   if (args.positional.length !== 1) return usageError(io, 'Give exactly one logger file.');
@@ -44,31 +37,32 @@ export function loggerCommand(argv: readonly string[], io: CommandIo): number {
   }
   let bytes: Uint8Array;
   try {
-    bytes = io.readFile(path);
+    bytes = await io.readBytes(path);
   } catch (e) {
     const code = (e as { code?: string }).code;
     const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
-    io.stderr(`Cannot read ${path}: ${why}.\n`);
-    return 2;
+    io.err(`Cannot read ${path}: ${why}.`);
+    return EXIT.badInput;
   }
   const analysis = analyseLoggerFile(bytes, options);
   if (analysis.status === 'failed') {
     const where = analysis.error.line ? ` (line ${analysis.error.line})` : analysis.error.column ? ` (column "${analysis.error.column}")` : '';
-    io.stderr(`Cannot read ${path}${where}: ${analysis.error.message}\n`);
-    return 2;
+    io.err(`Cannot read ${path}${where}: ${analysis.error.message}`);
+    return EXIT.badInput;
   }
   if (analysis.status === 'ask') {
     const lines = analysis.question.examples.map((e) => `  line ${e.line}: "${e.written}" is ${e.dayFirst} day-first or ${e.monthFirst} month-first`);
-    io.stderr(`Cannot read ${path} without knowing the date order. ${analysis.question.message}\n${lines.join('\n')}\nRun again with --date-order day-first or --date-order month-first.\n`);
-    return 2;
+    io.err(`Cannot read ${path} without knowing the date order. ${analysis.question.message}\n${lines.join('\n')}\nRun again with --date-order day-first or --date-order month-first.`);
+    return EXIT.badInput;
   }
-  io.stdout(args.flags.has('json') ? `${JSON.stringify(jsonView(path, analysis), null, 2)}\n` : textView(path, analysis));
-  return 0;
+  io.out(args.flags.has('json') ? `${JSON.stringify(jsonView(path, analysis), null, 2)}\n` : textView(path, analysis));
+  return EXIT.ok;
 }
 
 function usageError(io: CommandIo, message: string): number {
-  io.stderr(`${message}\n${LOGGER_USAGE}\n`);
-  return 1;
+  io.err(message);
+  io.err(LOGGER_USAGE);
+  return EXIT.badInput;
 }
 
 type Analysed = Extract<LoggerAnalysis, { status: 'analysed' }>;

@@ -1,26 +1,42 @@
 /**
  * The command line's entry (run with tsx: `npm run cli -- <command> …`). Each command lives in
  * its own file and is listed here; a command is a function of its arguments and an io object,
- * returning the exit code.
+ * returning the exit code (0 done, 2 bad input, 1 internal error).
  */
-import { readFileSync } from 'node:fs';
-import { loggerCommand, LOGGER_USAGE, type CommandIo } from './logger-command.ts';
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { dirname } from 'node:path';
+import { runAnalyseCommand, ANALYSE_USAGE } from './analyse-command.ts';
+import { EXIT, type CommandIo } from './command-io.ts';
+import { runLoggerCommand, LOGGER_USAGE } from './logger-command.ts';
+import { runReportCommand, REPORT_USAGE } from './report-command.ts';
 
-const commands: Record<string, { run: (argv: readonly string[], io: CommandIo) => number; usage: string }> = {
-  logger: { run: loggerCommand, usage: LOGGER_USAGE },
+const commands: Record<string, { run: (argv: string[], io: CommandIo) => Promise<number>; usage: string }> = {
+  analyse: { run: runAnalyseCommand, usage: ANALYSE_USAGE },
+  report: { run: runReportCommand, usage: REPORT_USAGE },
+  logger: { run: runLoggerCommand, usage: LOGGER_USAGE },
 };
 
 const io: CommandIo = {
-  readFile: (path) => readFileSync(path),
-  stdout: (text) => process.stdout.write(text),
-  stderr: (text) => process.stderr.write(text),
+  out: (s) => process.stdout.write(s),
+  err: (line) => process.stderr.write(`${line}\n`),
+  readFile: (path) => readFile(path, 'utf8'),
+  readBytes: async (path) => new Uint8Array(await readFile(path)),
+  writeFile: async (path, data) => {
+    await mkdir(dirname(path), { recursive: true });
+    await writeFile(path, data);
+  },
 };
 
 const [name, ...rest] = process.argv.slice(2);
 const command = name === undefined ? undefined : commands[name];
 if (!command) {
-  io.stderr(`${name ? `Unknown command "${name}". ` : ''}Commands:\n${Object.values(commands).map((c) => `  ${c.usage}`).join('\n')}\n`);
-  process.exitCode = 1;
+  io.err(`${name ? `Unknown command "${name}". ` : ''}Commands:\n${Object.values(commands).map((c) => `  ${c.usage}`).join('\n')}`);
+  process.exitCode = EXIT.badInput;
 } else {
-  process.exitCode = command.run(rest, io);
+  try {
+    process.exitCode = await command.run(rest, io);
+  } catch (error) {
+    io.err(`Internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+    process.exitCode = EXIT.internal;
+  }
 }

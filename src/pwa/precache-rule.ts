@@ -12,3 +12,18 @@ export const precacheGlobs: string[] = ['**/*.{js,mjs,css,html,woff,woff2,ttf,ot
 export const optionalJspdfChunks: string[] = ['html2canvas', 'canvg', 'purify'];
 
 export const precacheIgnores: string[] = optionalJspdfChunks.map((name) => `**/*${name}*`);
+
+/** Packages of jspdf's optional chunks, by the name fragment their chunk must carry. */
+const OPTIONAL_PACKAGES: Record<string, string> = { html2canvas: 'html2canvas', canvg: 'canvg', dompurify: 'purify' };
+
+/**
+ * The file name a build chunk must have so the ignore rule can see it: canvg's module is called
+ * index.es.js, so its chunk would otherwise be "index.es-<hash>.js" and be precached.
+ * Example: optionalChunkName(['/app/node_modules/canvg/lib/index.es.js']) = 'canvg'.
+ */
+export function optionalChunkName(moduleIds: readonly string[]): string | null {
+  for (const [pkg, name] of Object.entries(OPTIONAL_PACKAGES)) {
+    if (moduleIds.some((id) => id.includes(`/node_modules/${pkg}/`))) return name;
+  }
+  return null;
+}

@@ -7,7 +7,8 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { loggerCommand, type CommandIo } from '../../src/cli/logger-command.ts';
+import { runLoggerCommand } from '../../src/cli/logger-command.ts';
+import type { CommandIo } from '../../src/cli/command-io.ts';
 import { parseArguments } from '../../src/cli/arguments.ts';
 import { schoolRoom, writeLoggerFile } from '../support/logger-records.ts';
 
@@ -17,23 +18,27 @@ const text = writeLoggerFile(
   { delimiter: ';', decimalComma: true, preamble: ['Invented export'], writing: 'day-first', zone: 'Europe/London' },
 );
 
-function run(argv: string[], files: Record<string, string> = { 'room.csv': text }) {
+async function run(argv: string[], files: Record<string, string> = { 'room.csv': text }) {
   let out = '';
   let err = '';
-  const io: CommandIo = {
-    readFile: (path) => {
-      if (!(path in files)) throw Object.assign(new Error('missing'), { code: 'ENOENT' });
-      return new TextEncoder().encode(files[path]);
-    },
-    stdout: (t) => (out += t),
-    stderr: (t) => (err += t),
+  const bytes = async (path: string) => {
+    if (!(path in files)) throw Object.assign(new Error('missing'), { code: 'ENOENT' });
+    return new TextEncoder().encode(files[path]);
   };
-  return { code: loggerCommand(argv, io), out, err };
+  const io: CommandIo = {
+    readBytes: bytes,
+    readFile: async (path) => new TextDecoder().decode(await bytes(path)),
+    writeFile: async () => {},
+    out: (t) => (out += t),
+    err: (line) => (err += `${line}\n`),
+  };
+  const code = await runLoggerCommand(argv, io);
+  return { code, out, err };
 }
 
 describe('logger command in-process', () => {
-  it('prints the layout, columns, time format and periods', () => {
-    const r = run(['room.csv', '--volume', '120', '--outdoor', '420', '--tz', 'Europe/London']);
+  it('prints the layout, columns, time format and periods', async () => {
+    const r = await run(['room.csv', '--volume', '120', '--outdoor', '420', '--tz', 'Europe/London']);
     expect(r.code).toBe(0);
     expect(r.out).toContain('Layout: delimiter ";", decimal mark ","');
     expect(r.out).toMatch(/CO2 \(ppm\)\s+co2/);
@@ -43,8 +48,8 @@ describe('logger command in-process', () => {
     expect(r.out).toMatch(/L\/s/);
   });
 
-  it('prints JSON with --json', () => {
-    const r = run(['room.csv', '--json', '--volume=120', '--tz', 'Europe/London']);
+  it('prints JSON with --json', async () => {
+    const r = await run(['room.csv', '--json', '--volume=120', '--tz', 'Europe/London']);
     expect(r.code).toBe(0);
     const json = JSON.parse(r.out);
     expect(json.report.delimiter).toBe(';');
@@ -52,15 +57,15 @@ describe('logger command in-process', () => {
     expect(json.periods.some((p: { kind: string }) => p.kind === 'decay')).toBe(true);
   });
 
-  it('exits 1 for bad arguments and 2 for a file it cannot read', () => {
-    expect(run(['room.csv', '--volume', 'big']).code).toBe(1);
-    expect(run(['room.csv', '--colour']).err).toContain('Unknown option --colour');
-    const missing = run(['nope.csv']);
+  it('exits 2 for bad arguments and for a file it cannot read', async () => {
+    expect((await run(['room.csv', '--volume', 'big'])).code).toBe(2);
+    expect((await run(['room.csv', '--colour'])).err).toContain('Unknown option --colour');
+    const missing = await run(['nope.csv']);
     expect(missing).toMatchObject({ code: 2, err: 'Cannot read nope.csv: no such file.\n' });
-    const prose = run(['notes.txt'], { 'notes.txt': 'Dear landlord,\nthe vents are shut.\n' });
+    const prose = await run(['notes.txt'], { 'notes.txt': 'Dear landlord,\nthe vents are shut.\n' });
     expect(prose.code).toBe(2);
     expect(prose.err).toMatch(/^Cannot read notes.txt: No line of the file splits/);
-    const ambiguous = run(['a.csv'], { 'a.csv': 'Time,CO2\n05/06/2024 10:00,800\n05/06/2024 10:01,801\n' });
+    const ambiguous = await run(['a.csv'], { 'a.csv': 'Time,CO2\n05/06/2024 10:00,800\n05/06/2024 10:01,801\n' });
     expect(ambiguous.code).toBe(2);
     expect(ambiguous.err).toContain('--date-order');
   });

@@ -1,0 +1,129 @@
+/**
+ * The rooms to fix, in order. With the judgement: by priority (safety first), then urgency, then
+ * the outdoor air per person at the unfavourable end of its range. Without it: by that figure
+ * alone (least air per person first; rooms with no per-person figure last, in survey order),
+ * and every row says it is not judged. The order uses the analysis's figures as they are; the
+ * printed values are rounded by report-figure.ts.
+ *
+ * Example: for the demo school without a judgement, Classroom B2 (predicted, 0.6–2 L/s per person)
+ * ranks before Classroom B3 (measured, 0.9–1.2) and Classroom B1 (measured, 1.7–2.1).
+ */
+import type { AnalysisResults, RoomResults } from '../analysis/results.ts';
+import { roomUseLabel, type RoomUse } from '../core/room-uses.ts';
+import type { SurveyDocument } from '../model/survey-document.ts';
+import { metricKind, periodWords, statusWords } from './criterion-words.ts';
+import type { ReportCheckView, ReportJudgementView, ReportPriority, ReportUrgency } from './judgement-view.ts';
+import { displayNumber, rangeText, reportFigure } from './report-figure.ts';
+import type { RankedRoom } from './report-model.ts';
+import { roomPlace } from './room-place.ts';
+
+const PRIORITY_ORDER: readonly ReportPriority[] = ['safety', 'high', 'medium', 'low', 'none'];
+const URGENCY_ORDER: readonly ReportUrgency[] = ['immediate', 'weeks', 'planned', 'none'];
+
+/** Priority in words, text first (never colour alone). */
+export const PRIORITY_WORDS: Record<ReportPriority | 'not-judged', string> = {
+  safety: 'Safety: act now',
+  high: 'High',
+  medium: 'Medium',
+  low: 'Low',
+  none: 'No action',
+  'not-judged': 'Not judged',
+};
+
+export const URGENCY_WORDS: Record<ReportUrgency | 'not-judged', string> = {
+  immediate: 'immediately',
+  weeks: 'within weeks',
+  planned: 'in planned work',
+  none: 'no action needed',
+  'not-judged': 'not judged',
+};
+
+/** The order basis when the judgement is not available. */
+export const UNJUDGED_ORDER =
+  'The criteria judgement was not available when this report was made: no room is passed or failed here. Rooms are listed by outdoor air per person at the low end of its range, least first; rooms without occupants come last.';
+
+/** The figure rooms are ordered by: per-person supply at the low end, m³/s (null: none). */
+function orderFigure(room: RoomResults): number | null {
+  const f = room.headline.supplyPerPerson_m3s;
+  return f ? (f.low ?? f.value) : null;
+}
+
+function byFigure(a: RoomResults, b: RoomResults): number {
+  const fa = orderFigure(a);
+  const fb = orderFigure(b);
+  if (fa === null || fb === null) return (fa === null ? 1 : 0) - (fb === null ? 1 : 0);
+  return fa - fb;
+}
+
+/** A check's value or limit in display units. */
+export function checkValueText(check: ReportCheckView, which: 'value' | 'limit'): string {
+  const kind = metricKind(check.metric);
+  if (which === 'limit') {
+    if (check.limit === null) return '—';
+    if (!kind) return String(check.limit);
+    const limit = reportFigure('', { value: check.limit, low: null, high: null }, kind);
+    return `${check.metric === 'co2-above-outdoor' ? 'above outdoor ' : ''}${rangeText(limit.value, null, null, limit.unit)}`;
+  }
+  if (!check.value) return '—';
+  if (!kind) return String(check.value.value ?? '—');
+  const v = reportFigure('', check.value, kind);
+  return v.text;
+}
+
+/** The check a row shows: the first short, then uncertain, then any. */
+export function leadingCheck(checks: readonly ReportCheckView[]): ReportCheckView | null {
+  return checks.find((c) => c.outcome === 'short') ?? checks.find((c) => c.outcome === 'uncertain') ?? checks[0] ?? null;
+}
+
+/** Rank every room (see the file note). */
+export function rankRooms(doc: SurveyDocument, results: AnalysisResults, judgement: ReportJudgementView | null): { basis: string; rows: RankedRoom[] } {
+  const docRoom = (id: string) => doc.rooms.find((r) => r.id === id)!;
+  const rooms = results.rooms.map((r, i) => ({ r, i }));
+  rooms.sort((x, y) => {
+    if (judgement) {
+      const jx = judgement.rooms.get(x.r.roomId);
+      const jy = judgement.rooms.get(y.r.roomId);
+      const p = PRIORITY_ORDER.indexOf(jx?.priority ?? 'none') - PRIORITY_ORDER.indexOf(jy?.priority ?? 'none');
+      if (p !== 0) return p;
+      const u = URGENCY_ORDER.indexOf(jx?.urgency ?? 'none') - URGENCY_ORDER.indexOf(jy?.urgency ?? 'none');
+      if (u !== 0) return u;
+    }
+    return byFigure(x.r, y.r) || x.i - y.i;
+  });
+  const rows = rooms.map(({ r }, index): RankedRoom => {
+    const perPerson = r.headline.supplyPerPerson_m3s;
+    const figure = perPerson ? reportFigure('Outdoor air per person', perPerson, 'flowPerPerson') : reportFigure('Outdoor air', r.headline.supply_m3s, 'flow');
+    const common = { rank: index + 1, roomId: r.roomId, place: roomPlace(doc, docRoom(r.roomId)), use: roomUseLabel(r.use as RoomUse) };
+    const j = judgement?.rooms.get(r.roomId);
+    if (!j) {
+      return {
+        ...common,
+        priority: 'not-judged',
+        priorityText: PRIORITY_WORDS['not-judged'],
+        urgency: 'not-judged',
+        criterion: 'Not judged (judgement not available)',
+        value: `${figure.label}: ${figure.text}`,
+        limit: '—',
+        fix: r.suggestion ? 'Measure first: see the room sheet' : '—',
+      };
+    }
+    const check = leadingCheck(j.checks);
+    const fix = j.fixes[0];
+    return {
+      ...common,
+      priority: j.priority,
+      priorityText: PRIORITY_WORDS[j.priority],
+      urgency: j.urgency,
+      criterion: check ? `${check.title} (${statusWords(check.status)}; ${periodWords(check.period)})` : '—',
+      value: check ? checkValueText(check, 'value') : figure.text,
+      limit: check ? checkValueText(check, 'limit') : '—',
+      fix: fix
+        ? `${fix.title}${fix.extraSupply_m3s !== null ? `: about ${displayNumber(fix.extraSupply_m3s, 'flow')} L/s more` : ''}${fix.items.length ? ` (${fix.items.join('; ')})` : ''}`
+        : '—',
+    };
+  });
+  return {
+    basis: judgement ? 'Rooms are listed by priority (safety items first), then by how soon to act, then by outdoor air per person at the low end of its range.' : UNJUDGED_ORDER,
+    rows,
+  };
+}
