@@ -48,7 +48,6 @@ export interface JudgeContext {
   /** People the figures assume, with their CO2 output per person (m³/s); null when none. */
   occupants: { count: number; outputPerPerson_m3s: number; label: string } | null;
   floorArea_m2: number;
-  volume_m3: number;
   /** The measurement that would settle an uncertain result here, in words. */
   settleBy: string;
 }
@@ -124,7 +123,8 @@ const SOURCES: Readonly<Partial<Record<CriterionMetric, readonly EvidenceMetric[
   'co2-above-outdoor': ['co2-above-outdoor', 'co2-absolute'],
   'flow-per-person': ['flow-per-person', 'outdoor-air-flow'],
   'flow-per-person-and-area': ['outdoor-air-flow'],
-  'air-change-rate': ['air-change-rate', 'outdoor-air-flow'],
+  // Air change rates in the sets are fan capacities (purge by fan): never taken from a window-opening flow.
+  'air-change-rate': ['air-change-rate'],
 };
 
 function sourceText(c: Criterion): string {
@@ -218,8 +218,8 @@ export function judgeCriterion(selected: SelectedCriterion & { criterion: Criter
     }
     return notAssessed(`No figure of this room can show ${PERIOD_WORDS[c.period]} for this metric.`);
   }
-  if (refused.length > 0) {
-    notes.push(`${refusedWords.join(', ')} cannot show ${PERIOD_WORDS[c.period]}, so ${refused.length === 1 ? 'it was' : 'they were'} not used`);
+  if (refused.some((e) => e.period === 'instant')) {
+    notes.push(`a single reading cannot show ${PERIOD_WORDS[c.period]}, so it was not used`);
   }
 
   // 2. Conversions: excess above outdoor, per person, per person and area, air changes.
@@ -241,7 +241,6 @@ export function judgeCriterion(selected: SelectedCriterion & { criterion: Criter
       notes.push(`the limit is per person plus per m² of floor: ${people.count} people and ${ctx.floorArea_m2.toFixed(1)} m² give a total compared with the room's whole supply`);
     }
   }
-  if (c.metric === 'air-change-rate' && evidence.metric === 'outdoor-air-flow') x = mapEnds(evidence, (v) => v / ctx.volume_m3);
 
   // 3. Adult-output bands rescaled for the people in the room.
   if (c.metric === 'co2-above-outdoor' && c.assumedCo2Output_m3s !== undefined && people) {

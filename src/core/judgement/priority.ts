@@ -97,11 +97,21 @@ export function roomPriority(input: PriorityInput): RoomPriority {
   else if (input.mould.verdict === 'risk' || input.mould.verdict === 'uncertain') reasons.push({ kind: 'opinion', basis: 'predicted', text: input.mould.reason });
   if (input.glazing.verdict === 'observed') reasons.push({ kind: 'fact', basis: 'observed', text: input.glazing.reason });
   else if (input.glazing.verdict === 'condenses') reasons.push({ kind: 'opinion', basis: 'predicted', text: `Condensation on the glass is predicted in a typical coldest month. ${input.glazing.reason}` });
-  const failedLimit = input.checks.filter((c) => c.role === 'limit' && c.outcome === 'does-not-meet');
-  const open = input.checks.filter((c) => (c.role === 'limit' || c.role === 'benchmark') && (c.outcome === 'uncertain' || (c.role === 'benchmark' && c.outcome === 'does-not-meet')));
+  // One check per group of alternatives: the most lenient row (largest margin), so a room below
+  // EN 16798-1 category III is not also listed below I and II.
+  const lenient = new Map<string, CriterionCheck>();
+  for (const c of input.checks) {
+    if (c.role !== 'limit' && c.role !== 'benchmark') continue;
+    const cur = lenient.get(c.group);
+    if (!cur || (c.margin?.atFavourable ?? Number.NEGATIVE_INFINITY) > (cur.margin?.atFavourable ?? Number.NEGATIVE_INFINITY)) lenient.set(c.group, c);
+  }
+  const kept = input.checks.filter((c) => lenient.get(c.group) === c);
+  const failedLimit = kept.filter((c) => c.role === 'limit' && c.outcome === 'does-not-meet');
+  const open = kept.filter((c) => c.outcome === 'uncertain' || (c.role === 'benchmark' && c.outcome === 'does-not-meet'));
   for (const c of [...failedLimit, ...open]) {
-    const v = c.value!;
-    reasons.push({ kind: kindOf(v.basis), basis: v.basis, text: `${c.statement}: ${valueWords(c)} (${v.describe}).${c.settleBy ? ` ${c.settleBy}` : ''}` });
+    const v = c.value;
+    const basis: EvidenceBasis = v ? v.basis : 'observed';
+    reasons.push({ kind: kindOf(basis), basis, text: v ? `${c.statement}: ${valueWords(c)} (${v.describe}).${c.settleBy ? ` ${c.settleBy}` : ''}` : `${c.statement}.` });
   }
   const extra = input.extraNeeded_m3s;
   if (extra !== null && extra > 0) {

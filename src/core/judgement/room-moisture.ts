@@ -65,7 +65,7 @@ export type GlazingVerdict = 'observed' | 'condenses' | 'uncertain' | 'dry' | 'n
 /** The room's moisture findings. */
 export interface RoomMoisture {
   month: MonthlyOutdoorMean;
-  /** Room RH in the coldest month, %. */
+  /** Room RH in the coldest month, % (100 = saturated: water condenses on the coldest surfaces). */
   indoorRh_pct: EndFigures;
   /** Monthly-mean RH on the coldest wall, %; null ends where the wall is unknown or the room has no air. */
   wallSurfaceRh_pct: EndFigures;
@@ -83,6 +83,8 @@ const METHOD =
   'coldest-month steady humidity-ratio balance (dry-air mass flow) at both ends of supply and moisture release; monthly-mean surface RH on the coldest wall against 80 % (ISO 13788 / BS 5250); glazing at 100 %';
 
 const finite = (x: number): number | null => (Number.isFinite(x) ? x : null);
+/** RH above 100 % means the air would condense: reported as 100 (saturated). */
+const capped = (x: number | null): number | null => (x === null ? null : Math.min(100, x));
 
 /** Steady room RH (%), or null with no supply. */
 function roomRh(input: RoomMoistureInput, month: MonthlyOutdoorMean, supply: number, source: number) {
@@ -167,10 +169,11 @@ export function roomMoisture(input: RoomMoistureInput): RoomMoisture {
 
   const diagnosis = input.diagnosis ? diagnoseDamp(input.diagnosis) : null;
   if (diagnosis) warnings.push(...diagnosis.warnings);
+  const cap = (e: EndFigures): EndFigures => ({ favourable: capped(e.favourable), central: capped(e.central), unfavourable: capped(e.unfavourable) });
   return {
     month,
-    indoorRh_pct: indoorRh,
-    wallSurfaceRh_pct: wallRh,
+    indoorRh_pct: cap(indoorRh),
+    wallSurfaceRh_pct: cap(wallRh),
     wallFactor: wall,
     mould,
     glazing,

@@ -12,7 +12,8 @@
  *   as above.
  * - Fire doors (flat entrance doors, doors on escape routes) are never undercut or wedged.
  * - New openings only through an OUTSIDE wall of the room: never through compartment walls or
- *   into escape routes.
+ *   into escape routes (an extract fan in an inner room may be ducted out, fire-stopped where a
+ *   duct crosses a compartment wall or floor).
  * - Drilling in a building from before 2000 (or of unknown age): an asbestos check first.
  * - More extract on a ground floor (or unknown floor): radon noted (extract can draw soil gas).
  */
@@ -101,7 +102,11 @@ export function safetyGates(kind: FixKind, facts: GateFacts): SafetyGate[] {
     });
   }
   if (DRILLING.has(kind)) {
-    if (!facts.outsideWall) gates.push({ code: 'outside-wall-only', blocking: true, message: 'The room has no outside wall recorded: no new opening through a compartment wall or into an escape route.' });
+    if (!facts.outsideWall && kind === 'add-extract-fan') {
+      gates.push({ code: 'outside-wall-only', blocking: false, message: 'No outside wall is recorded: the fan must be ducted to outside without crossing a compartment wall or floor unless fire-stopped by a competent installer.' });
+    } else if (!facts.outsideWall) {
+      gates.push({ code: 'outside-wall-only', blocking: true, message: 'The room has no outside wall recorded: no new opening through a compartment wall or into an escape route.' });
+    }
     if (facts.escapeRoute) gates.push({ code: 'escape-route', blocking: true, message: 'No new opening in an escape route without a fire-safety adviser.' });
     if (facts.builtBefore2000 !== false) {
       gates.push({ code: 'asbestos-check', blocking: false, message: 'The building is from before 2000 (or its age is not known): an asbestos check before drilling or cutting.' });

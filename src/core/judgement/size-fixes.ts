@@ -9,7 +9,8 @@
  * Quantities are searched, not simulated: vents one by one up to what the wall takes (at most 8),
  * fan and unit sizes by bisection over the stock sizes (the supply rises with the size), and the
  * largest occupancy by bisection on the count. An option that cannot reach the target at its
- * largest size is NOT offered (physically trivial for the shortfall), and is listed with why.
+ * largest size is NOT offered (physically trivial for the shortfall), and is listed with why; an
+ * occupancy limit below half the room's stated use is no fix either (our own rule).
  * Options are ordered from least to most invasive. "Open the windows" is never a fix for winter:
  * freeing a stuck window is listed only as supporting work, for airing.
  */
@@ -185,11 +186,14 @@ export function sizeFixes(input: FixSizingInput): FixPlan {
     }
     if (input.deadExtractFans.length > 0) {
       consider('repair-extract-fan', () => {
-        const after = supplyOf(repairFans(input.winter, input.deadExtractFans));
-        const flow = input.deadExtractFans.reduce((s, f) => s + f.flow_m3s, 0);
-        return after >= target
-          ? { title: `Repair or replace the extract fan and commission it at ${ls(flow)} L/s, measured`, quantity: { value: ls(flow), unit: 'L/s measured' }, after }
-          : short('Repairing the extract fan', after);
+        // At least its rating; a stock size up when the rating falls short at the unfavourable end (measured ±15 %).
+        const rated = input.deadExtractFans.reduce((s, f) => s + f.flow_m3s, 0);
+        const sizes = [rated, ...EXTRACT_FAN_SIZES_M3S.filter((q) => q > rated)];
+        const afterFor = (q: number) => supplyOf(repairFans(input.winter, input.deadExtractFans.map((f) => ({ id: f.id, flow_m3s: (f.flow_m3s / rated) * q }))));
+        const k = smallestSize(sizes, (q) => afterFor(q) >= target);
+        if (k < 0) return short('Replacing the extract fan with the largest stock size', afterFor(sizes[sizes.length - 1]!));
+        const q = sizes[k]!;
+        return { title: `${k === 0 ? 'Repair or replace' : 'Replace'} the extract fan and commission it at ${ls(q)} L/s, measured`, quantity: { value: ls(q), unit: 'L/s measured' }, after: afterFor(q) };
       });
     }
     const wall = input.outsideWall;
@@ -228,7 +232,7 @@ export function sizeFixes(input: FixSizingInput): FixPlan {
           if (fits(mid)) lo = mid;
           else hi = mid - 1;
         }
-        if (lo < 1) return 'Even one person would need more air than the room gets now.';
+        if (lo * 2 < occ.count) return `The room would fit only ${lo} of its ${occ.count} people with the air it gets now: below half its use, that is no fix.`;
         return { title: `Use the room for at most ${lo} people until the ventilation is improved`, quantity: { value: lo, unit: 'people' }, after: current };
       });
     }
