@@ -40,7 +40,7 @@ function forBedrooms(criteria: readonly EditedCriterion[], bedrooms: number | nu
  */
 export function judgeArea(area: Area, a: Omit<AreaResults, 'judgement'>, rooms: readonly RoomResults[], survey: Survey, criteria: readonly EditedCriterion[]): AreaJudgement {
   const warnings: AnalysisWarning[] = [];
-  const own = rooms.filter((r) => a.roomIds.includes(r.roomId));
+  const own = rooms.filter((r) => a.roomIds.includes(r.roomId)).sort((x, y) => (x.roomId < y.roomId ? -1 : 1));
   const safety = own.flatMap((r) => r.judgement.safety.map((item) => ({ roomId: r.roomId, item })));
   let checks: CriterionCheck[] = [];
   let extra: number | null = null;
