@@ -58,7 +58,7 @@ export const DEFAULT_DRAWS = 1000;
 export const DEFAULT_THRESHOLDS_PPM: readonly number[] = [1000, 1500];
 export const DEFAULT_WINDOW_S = 1200;
 
-interface SurveyContext {
+export interface SurveyContext {
   doc: SurveyDocument;
   site: SiteInputs;
   cases: WeatherCases;
@@ -78,7 +78,7 @@ const DEFAULT_SUGGESTION =
   'A 20-minute decay test (readings every 2–5 minutes after the room empties, doors and windows as normally found) would measure this room’s supply.';
 
 /** A room's results before judgement, with what judging it needs from the analysis. */
-interface AnalysedRoom {
+export interface AnalysedRoom {
   results: Omit<RoomResults, 'judgement'>;
   winter: RoomAirflowInput;
   asFound: RoomAirflowInput;
@@ -223,11 +223,20 @@ function analyseRoom(room: DocumentRoom, ctx: SurveyContext): AnalysedRoom {
   };
 }
 
+/** Stage one of analyseSurvey: every room's figures (measured, predicted, scenarios), before judgement. */
+export interface SurveyFigures {
+  doc: SurveyDocument;
+  ctx: SurveyContext;
+  source: ReturnType<typeof weatherCases>['source'];
+  outdoor: ReturnType<typeof outdoorFor>;
+  rooms: AnalysedRoom[];
+}
+
 /**
- * Analyse a validated survey document (see the file note).
- * Example: analyseSurvey(doc, { draws: 200 }).stamps = { engineVersion: '0.2.0', formatVersion: 1, analysisVersion: '0.2.0', criteria: { setId: 'schools', version: 1, edits: [] } }.
+ * Stage one: the figures of every room (the Monte Carlo intervals live here).
+ * Example: surveyFigures(doc, { draws: 50 }).rooms.length = doc.rooms.length.
  */
-export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}): AnalysisResults {
+export function surveyFigures(doc: SurveyDocument, options: AnalysisOptions = {}): SurveyFigures {
   const survey = doc.survey;
   const site = siteInputs(survey);
   const { cases, source } = weatherCases(survey);
@@ -242,7 +251,19 @@ export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}
     thresholds_ppm: options.thresholds_ppm ?? DEFAULT_THRESHOLDS_PPM,
     window_s: options.window_s ?? DEFAULT_WINDOW_S,
   };
-  const analysed = doc.rooms.map((room) => analyseRoom(room, ctx));
+  return { doc, ctx, source, outdoor, rooms: doc.rooms.map((room) => analyseRoom(room, ctx)) };
+}
+
+/**
+ * Stage two: judge the figures (criteria, moisture, safety, fixes, priority, ranking), add up the
+ * areas and put the results together.
+ * Example: judgeSurvey(surveyFigures(doc)) equals analyseSurvey(doc).
+ */
+export function judgeSurvey(figures: SurveyFigures): AnalysisResults {
+  const { doc, ctx, source, outdoor } = figures;
+  const { site, cases } = ctx;
+  const survey = doc.survey;
+  const analysed = figures.rooms;
   const chosen = surveyCriteria(survey);
   const judged = analysed.map((a, i) => ({
     ...a.results,
@@ -278,4 +299,12 @@ export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}
       levels,
     },
   };
+}
+
+/**
+ * Analyse a validated survey document (see the file note): surveyFigures, then judgeSurvey.
+ * Example: analyseSurvey(doc, { draws: 200 }).stamps = { engineVersion: '0.2.0', formatVersion: 1, analysisVersion: '0.2.0', criteria: { setId: 'schools', version: 1, edits: [] } }.
+ */
+export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}): AnalysisResults {
+  return judgeSurvey(surveyFigures(doc, options));
 }

@@ -6,9 +6,10 @@
  * is re-assessed as the scenarios are: measured supply plus the predicted change, end by end
  * (src/analysis/scenarios.ts), so a fix is never credited with more than the engine predicts it adds.
  *
- * Quantities are searched, not simulated: vents one by one up to what the wall takes (at most 8),
- * fan and unit sizes by bisection over the stock sizes (the supply rises with the size), and the
- * largest occupancy by bisection on the count. An option that cannot reach the target at its
+ * Quantities are searched, not simulated: vent counts (up to what the wall takes, at most 8) and
+ * fan and unit sizes by bisection over the stock sizes (the supply rises with the size: a tested
+ * property), the largest size tried first; a candidate is predicted in the baseline's worst case
+ * first and dropped at the first case that falls short; the largest occupancy by bisection. An option that cannot reach the target at its
  * largest size is NOT offered (physically trivial for the shortfall), and is listed with why; an
  * occupancy limit below half the room's stated use is no fix either (our own rule).
  * Options are ordered from least to most invasive. "Open the windows" is never a fix for winter:
@@ -16,7 +17,7 @@
  */
 import type { RoomAirflowInput } from '../airflow-inputs.ts';
 import type { FlowRange } from '../flow-range.ts';
-import { predictRoomSupplyOverCases } from '../room-supply-prediction.ts';
+import { predictRoomSupply, predictRoomSupplyOverCases } from '../room-supply-prediction.ts';
 import { litresPerSecond, roundToStep } from '../units.ts';
 import type { WeatherCases } from '../weather-cases.ts';
 import { addFan, addVents, EXTRACT_FAN_SIZES_M3S, maxAddedVents, openVents, repairFans, SUPPLY_UNIT_SIZES_M3S, type OutsideWall } from './fix-options.ts';
@@ -106,22 +107,24 @@ const CAUTION =
 
 const ls = (q: number) => roundToStep(litresPerSecond(q), 0.5);
 
-/** The lowest supply over the weather cases at the unfavourable end, m³/s (see the file note). */
-function assessor(input: FixSizingInput): (candidate: RoomAirflowInput) => number {
+/**
+ * The lowest supply over the weather cases at the unfavourable end (m³/s, see the file note),
+ * and a quicker test of whether a candidate reaches a level: it predicts the baseline's worst
+ * case first and stops at the first case that falls short.
+ */
+function assessor(input: FixSizingInput): { supplyOf: (candidate: RoomAirflowInput) => number; reaches: (candidate: RoomAirflowInput, level: number) => boolean } {
   const base = input.anchor ? predictRoomSupplyOverCases(input.anchor.state, input.cases).predictions.map((p) => p.outdoorAir) : null;
-  return (candidate) => {
-    const over = predictRoomSupplyOverCases(candidate, input.cases).predictions;
-    let worst = Number.POSITIVE_INFINITY;
-    over.forEach((p, k) => {
-      const a = p.outdoorAir;
-      let low = a.low;
-      if (base && input.anchor) {
-        const b = base[k]!;
-        low = Math.max(0, input.anchor.measured.low + Math.min(a.low - b.low, a.central - b.central, a.high - b.high));
-      }
-      worst = Math.min(worst, low);
-    });
-    return worst;
+  const lowIn = (a: FlowRange, k: number): number => {
+    if (!base || !input.anchor) return a.low;
+    const b = base[k]!;
+    return Math.max(0, input.anchor.measured.low + Math.min(a.low - b.low, a.central - b.central, a.high - b.high));
+  };
+  const lows = (candidate: RoomAirflowInput) => predictRoomSupplyOverCases(candidate, input.cases).predictions.map((p, k) => lowIn(p.outdoorAir, k));
+  const winterLows = lows(input.winter);
+  const order = winterLows.map((v, k) => [v, k] as const).sort((a, b) => a[0] - b[0] || a[1] - b[1]).map(([, k]) => k);
+  return {
+    supplyOf: (candidate) => Math.min(...lows(candidate)),
+    reaches: (candidate, level) => order.every((k) => lowIn(predictRoomSupply(candidate, input.cases[k]!).outdoorAir, k) >= level),
   };
 }
 
@@ -145,7 +148,7 @@ function smallestSize(sizes: readonly number[], meets: (size: number) => boolean
  * people" offered.
  */
 export function sizeFixes(input: FixSizingInput): FixPlan {
-  const supplyOf = assessor(input);
+  const { supplyOf, reaches } = assessor(input);
   const current = supplyOf(input.winter);
   const target = input.target_m3s;
   const options: FixOption[] = [];
@@ -189,8 +192,9 @@ export function sizeFixes(input: FixSizingInput): FixPlan {
         // At least its rating; a stock size up when the rating falls short at the unfavourable end (measured ±15 %).
         const rated = input.deadExtractFans.reduce((s, f) => s + f.flow_m3s, 0);
         const sizes = [rated, ...EXTRACT_FAN_SIZES_M3S.filter((q) => q > rated)];
-        const afterFor = (q: number) => supplyOf(repairFans(input.winter, input.deadExtractFans.map((f) => ({ id: f.id, flow_m3s: (f.flow_m3s / rated) * q }))));
-        const k = smallestSize(sizes, (q) => afterFor(q) >= target);
+        const repaired = (q: number) => repairFans(input.winter, input.deadExtractFans.map((f) => ({ id: f.id, flow_m3s: (f.flow_m3s / rated) * q })));
+        const afterFor = (q: number) => supplyOf(repaired(q));
+        const k = smallestSize(sizes, (q) => reaches(repaired(q), target));
         if (k < 0) return short('Replacing the extract fan with the largest stock size', afterFor(sizes[sizes.length - 1]!));
         const q = sizes[k]!;
         return { title: `${k === 0 ? 'Repair or replace' : 'Replace'} the extract fan and commission it at ${ls(q)} L/s, measured`, quantity: { value: ls(q), unit: 'L/s measured' }, after: afterFor(q) };
@@ -200,11 +204,12 @@ export function sizeFixes(input: FixSizingInput): FixPlan {
     if (wall) {
       consider('add-background-vents', () => {
         const most = maxAddedVents(wall.length_m);
-        for (let n = 1; n <= most; n++) {
-          const after = supplyOf(addVents(input.winter, n, wall));
-          if (after >= target) return { title: `Add ${n} background vent${n > 1 ? 's' : ''} of 5,000 mm² equivalent area each in the outside wall`, quantity: { value: n, unit: '× 5,000 mm²' }, after };
-        }
-        return most < 1 ? 'The outside wall is too short for another vent.' : short(`${most} added 5,000 mm² vents (the most the wall takes)`, supplyOf(addVents(input.winter, most, wall)));
+        if (most < 1) return 'The outside wall is too short for another vent.';
+        const counts = Array.from({ length: most }, (_, k) => k + 1);
+        const k = smallestSize(counts, (n) => reaches(addVents(input.winter, n, wall), target));
+        if (k < 0) return short(`${most} added 5,000 mm² vents (the most the wall takes)`, supplyOf(addVents(input.winter, most, wall)));
+        const n = counts[k]!;
+        return { title: `Add ${n} background vent${n > 1 ? 's' : ''} of 5,000 mm² equivalent area each in the outside wall`, quantity: { value: n, unit: '× 5,000 mm²' }, after: supplyOf(addVents(input.winter, n, wall)) };
       });
     } else {
       notOffered.push({ kind: 'add-background-vents', why: 'No outside wall is recorded: no new opening through a compartment wall or into an escape route.' });
@@ -214,7 +219,7 @@ export function sizeFixes(input: FixSizingInput): FixPlan {
     const role = input.extractRoom ? 'extract' : 'supply';
     consider(fanKind, () => {
       const afterFor = (q: number) => supplyOf(addFan(input.winter, role, q));
-      const k = smallestSize(sizes, (q) => afterFor(q) >= target);
+      const k = smallestSize(sizes, (q) => reaches(addFan(input.winter, role, q), target));
       if (k < 0) return short(`The largest ${role === 'extract' ? 'extract fan' : 'supply unit'} considered`, afterFor(sizes[sizes.length - 1]!));
       const q = sizes[k]!;
       const what = role === 'extract' ? 'an extract fan' : 'a mechanical supply unit (single-room heat recovery, or ducted supply designed by a ventilation engineer)';
