@@ -45,7 +45,7 @@ export type AnalysisWarningCode =
   | 'area-rooms-partial'
   | 'weather-cases-assumed'
   | 'situation-assumed'
-  | 'criterion-edit-not-applied'
+  | 'criteria-version-differs'
   | 'moisture-activity-assumed'
   | 'glazing-assumed'
   | 'outdoor-humidity-from-visit'

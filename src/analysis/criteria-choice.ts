@@ -38,7 +38,7 @@ export function surveyCriteria(survey: Survey): { criteria: EditedCriterion[]; s
   const applied = applyCriterionEdits(shipped, edits);
   const warnings = applied.warnings.map(fromMoistureWarning);
   if (survey.criteria && survey.criteria.version !== String(CRITERIA_DATA_VERSION)) {
-    warnings.push(analysisWarning('criterion-edit-not-applied', 'info', `The survey chose criteria version ${survey.criteria.version}; this analysis uses version ${CRITERIA_DATA_VERSION} of the criteria data.`));
+    warnings.push(analysisWarning('criteria-version-differs', 'info', `The survey chose criteria version ${survey.criteria.version}; this analysis uses version ${CRITERIA_DATA_VERSION} of the criteria data.`));
   }
   return {
     criteria: applied.criteria,
