@@ -29,7 +29,13 @@ import { outdoorFor } from './meter-inputs.ts';
 import { asFoundCounts, designCounts, occupancyOf, roomAir, roomTemperature } from './occupancy-inputs.ts';
 import { readingSets } from './reading-sets.ts';
 import { reconcile } from './reconcile.ts';
-import type { AnalysisResults, RoomHeadline, RoomResults } from './results.ts';
+import type { AnalysisResults, MeasuredEstimate, RoomHeadline, RoomResults, SurveyJudgement } from './results.ts';
+import type { RoomAirflowInput } from '../core/airflow-inputs.ts';
+import { PRIORITY_LEVELS, priorityWords } from '../core/judgement/priority.ts';
+import { rankRooms } from '../core/judgement/rank-rooms.ts';
+import { surveyCriteria } from './criteria-choice.ts';
+import { judgeArea } from './judge-area.ts';
+import { judgeRoom } from './judge-room.ts';
 import { ceilingHeight, exposedEnvelope, roomAirflowContext, roomAirflowInput } from './room-airflow-input.ts';
 import { closedState, stateFromConditions, ventsOpenState, windowsOpenState, type RoomState } from './room-state.ts';
 import { roomScenarios } from './scenarios.ts';
@@ -39,7 +45,7 @@ import { predictRoomSupplyOverCases } from '../core/room-supply-prediction.ts';
 import type { WeatherCases } from '../core/weather-cases.ts';
 
 /** The analysis's own version: raise it when a mapping or rule here changes a number. */
-export const ANALYSIS_VERSION = '0.1.0';
+export const ANALYSIS_VERSION = '0.2.0';
 
 export interface AnalysisOptions {
   draws?: number;
@@ -52,7 +58,7 @@ export const DEFAULT_DRAWS = 1000;
 export const DEFAULT_THRESHOLDS_PPM: readonly number[] = [1000, 1500];
 export const DEFAULT_WINDOW_S = 1200;
 
-interface SurveyContext {
+export interface SurveyContext {
   doc: SurveyDocument;
   site: SiteInputs;
   cases: WeatherCases;
@@ -71,7 +77,15 @@ const SUGGESTIONS: Readonly<Record<string, string>> = {
 const DEFAULT_SUGGESTION =
   'A 20-minute decay test (readings every 2–5 minutes after the room empties, doors and windows as normally found) would measure this room’s supply.';
 
-function analyseRoom(room: DocumentRoom, ctx: SurveyContext): RoomResults {
+/** A room's results before judgement, with what judging it needs from the analysis. */
+export interface AnalysedRoom {
+  results: Omit<RoomResults, 'judgement'>;
+  winter: RoomAirflowInput;
+  asFound: RoomAirflowInput;
+  best: MeasuredEstimate | null;
+}
+
+function analyseRoom(room: DocumentRoom, ctx: SurveyContext): AnalysedRoom {
   const { doc } = ctx;
   const volume = roomVolume(room.geometry);
   const floorArea = roomFloorArea(room.geometry);
@@ -181,7 +195,7 @@ function analyseRoom(room: DocumentRoom, ctx: SurveyContext): RoomResults {
     );
   }
   const envelope = exposedEnvelope(room, ceiling);
-  return {
+  const results = {
     roomId: room.id,
     name: room.name,
     clientRef: room.clientRef,
@@ -200,15 +214,29 @@ function analyseRoom(room: DocumentRoom, ctx: SurveyContext): RoomResults {
     reconciliation,
     suggestion,
     warnings: uniqueWarnings(warnings),
-    judgement: null,
+  };
+  return {
+    results,
+    winter: roomAirflowInput(airflow, states.closed, null).input,
+    asFound: roomAirflowInput(airflow, states['as-found'], null).input,
+    best,
   };
 }
 
+/** Stage one of analyseSurvey: every room's figures (measured, predicted, scenarios), before judgement. */
+export interface SurveyFigures {
+  doc: SurveyDocument;
+  ctx: SurveyContext;
+  source: ReturnType<typeof weatherCases>['source'];
+  outdoor: ReturnType<typeof outdoorFor>;
+  rooms: AnalysedRoom[];
+}
+
 /**
- * Analyse a validated survey document (see the file note).
- * Example: analyseSurvey(doc, { draws: 200 }).stamps = { engineVersion: '0.2.0', formatVersion: 1, analysisVersion: '0.1.0', criteria: null }.
+ * Stage one: the figures of every room (the Monte Carlo intervals live here).
+ * Example: surveyFigures(doc, { draws: 50 }).rooms.length = doc.rooms.length.
  */
-export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}): AnalysisResults {
+export function surveyFigures(doc: SurveyDocument, options: AnalysisOptions = {}): SurveyFigures {
   const survey = doc.survey;
   const site = siteInputs(survey);
   const { cases, source } = weatherCases(survey);
@@ -223,16 +251,40 @@ export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}
     thresholds_ppm: options.thresholds_ppm ?? DEFAULT_THRESHOLDS_PPM,
     window_s: options.window_s ?? DEFAULT_WINDOW_S,
   };
-  const rooms = doc.rooms.map((room) => analyseRoom(room, ctx));
-  const areas = doc.areas.map((area) => assessArea(area, doc.areas, rooms));
-  const warnings: AnalysisWarning[] = [...site.warnings, ...outdoor.warnings.map(fromEngineWarning)];
+  return { doc, ctx, source, outdoor, rooms: doc.rooms.map((room) => analyseRoom(room, ctx)) };
+}
+
+/**
+ * Stage two: judge the figures (criteria, moisture, safety, fixes, priority, ranking), add up the
+ * areas and put the results together.
+ * Example: judgeSurvey(surveyFigures(doc)) equals analyseSurvey(doc).
+ */
+export function judgeSurvey(figures: SurveyFigures): AnalysisResults {
+  const { doc, ctx, source, outdoor } = figures;
+  const { site, cases } = ctx;
+  const survey = doc.survey;
+  const analysed = figures.rooms;
+  const chosen = surveyCriteria(survey);
+  const judged = analysed.map((a, i) => ({
+    ...a.results,
+    judgement: judgeRoom({ room: doc.rooms[i]!, results: a.results, doc, criteria: chosen.criteria, cases, outdoor_ppm: outdoor.value_ppm, winter: a.winter, asFound: a.asFound, best: a.best }),
+  }));
+  const ranked = rankRooms(judged.map((r) => ({ id: r.roomId, safetyItems: r.judgement.safety.length, level: r.judgement.priority.level, severity: r.judgement.severity })));
+  const rankOf = new Map(ranked.map((r) => [r.id, r.rank]));
+  const rooms: RoomResults[] = judged.map((r) => ({ ...r, judgement: { ...r.judgement, rank: rankOf.get(r.roomId)! } }));
+  const areas = doc.areas.map((area) => {
+    const figures = assessArea(area, doc.areas, rooms);
+    return { ...figures, judgement: judgeArea(area, figures, rooms, survey, chosen.criteria) };
+  });
+  const levels = Object.fromEntries(PRIORITY_LEVELS.map((l) => [l.level, rooms.filter((r) => r.judgement.priority.level === l.level).length])) as SurveyJudgement['levels'];
+  const warnings: AnalysisWarning[] = [...site.warnings, ...outdoor.warnings.map(fromEngineWarning), ...chosen.warnings];
   if (source === 'screening') {
     warnings.push(analysisWarning('weather-cases-assumed', 'info', 'No design weather cases are stated: predictions use the screening cases (cold and calm, cold and windy, mild and calm).'));
   }
   const meanRoomTemp = rooms.length > 0 ? rooms.reduce((s, r) => s + r.roomTemp_C.value!, 0) / rooms.length : 20;
   const day = dayWeatherCase(survey, meanRoomTemp);
   return {
-    stamps: { engineVersion: ENGINE_VERSION, formatVersion: CURRENT_FORMAT_VERSION, analysisVersion: ANALYSIS_VERSION, criteria: null },
+    stamps: { engineVersion: ENGINE_VERSION, formatVersion: CURRENT_FORMAT_VERSION, analysisVersion: ANALYSIS_VERSION, criteria: chosen.stamp },
     surveyId: survey.id,
     settings: { draws: ctx.draws, seed: ctx.seed, thresholds_ppm: [...ctx.thresholds_ppm], window_s: ctx.window_s },
     weatherCases: cases.map((c) => weatherCaseResult(c, source)),
@@ -241,6 +293,18 @@ export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}
     rooms,
     areas,
     warnings: uniqueWarnings(warnings),
-    judgement: null,
+    judgement: {
+      ranking: ranked.map((r) => ({ roomId: r.id, rank: r.rank, level: r.level, words: priorityWords(r.level), safetyItems: r.safetyItems, severity: r.severity })),
+      safety: ranked.flatMap((r) => rooms.find((x) => x.roomId === r.id)!.judgement.safety.map((item) => ({ roomId: r.id, item }))),
+      levels,
+    },
   };
+}
+
+/**
+ * Analyse a validated survey document (see the file note): surveyFigures, then judgeSurvey.
+ * Example: analyseSurvey(doc, { draws: 200 }).stamps = { engineVersion: '0.2.0', formatVersion: 1, analysisVersion: '0.2.0', criteria: { setId: 'schools', version: 1, edits: [] } }.
+ */
+export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}): AnalysisResults {
+  return judgeSurvey(surveyFigures(doc, options));
 }

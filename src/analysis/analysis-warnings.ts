@@ -13,6 +13,7 @@
  */
 import type { AirflowWarning, AirflowWarningCode } from '../core/airflow-warnings.ts';
 import type { EngineWarning, WarningCode } from '../core/warnings.ts';
+import type { MoistureWarning, MoistureWarningCode } from '../core/moisture-warnings.ts';
 
 export type WarningSeverity = 'info' | 'caution' | 'error';
 
@@ -42,10 +43,18 @@ export type AnalysisWarningCode =
   | 'terminal-at-boost'
   | 'system-state-unknown'
   | 'area-rooms-partial'
-  | 'weather-cases-assumed';
+  | 'weather-cases-assumed'
+  | 'situation-assumed'
+  | 'criteria-version-differs'
+  | 'moisture-activity-assumed'
+  | 'glazing-assumed'
+  | 'outdoor-humidity-from-visit'
+  | 'too-cold-for-ventilation'
+  | 'no-single-fix'
+  | 'bedrooms-unknown';
 
 export interface AnalysisWarning {
-  code: WarningCode | AirflowWarningCode | AnalysisWarningCode;
+  code: WarningCode | AirflowWarningCode | MoistureWarningCode | AnalysisWarningCode;
   severity: WarningSeverity;
   message: string;
 }
@@ -112,4 +121,28 @@ export function uniqueWarnings(warnings: readonly AnalysisWarning[]): AnalysisWa
     seen.add(key);
     return true;
   });
+}
+
+const MOISTURE_CAUTIONS: ReadonlySet<MoistureWarningCode> = new Set<MoistureWarningCode>([
+  'factor-assumed',
+  'surface-saturated',
+  'no-supply',
+  'air-saturated',
+  'observed-mould',
+  'too-few-days',
+  'mild-days-only',
+  'outdoor-above-indoor',
+  'small-temperature-difference',
+  'factor-out-of-range',
+  'edit-unknown-criterion',
+  'edit-stale-value',
+]);
+
+/**
+ * A moisture or criteria warning with its severity (caution when it could understate a risk or
+ * an edit was refused, info otherwise).
+ * Example: fromMoistureWarning({ code: 'observed-mould', message: '…' }).severity = 'caution'.
+ */
+export function fromMoistureWarning(w: MoistureWarning): AnalysisWarning {
+  return { code: w.code, severity: MOISTURE_CAUTIONS.has(w.code) ? 'caution' : 'info', message: w.message };
 }

@@ -11,6 +11,8 @@
  *   that serve a surveyed room are already in that room's figure.
  * - Floor area: the dwelling's recorded area, else the surveyed rooms' floor areas added.
  *
+ * Judging the figures is judge-area.ts's.
+ *
  * Example: a flat of two surveyed rooms at 10 and 6 L/s, 58 m² recorded, 3 usual occupants →
  * 16 L/s, 0.28 L/s per m², 5.3 L/s per occupant.
  */
@@ -54,7 +56,7 @@ const per = (r: Ranged, d: number): Ranged => ({
  * The figures of one area from its rooms' results.
  * Example: assessArea(flat3, areas, rooms).roomIds = the ids of Bedroom 1 and Living room, sorted.
  */
-export function assessArea(area: Area, areas: readonly Area[], rooms: readonly RoomResults[]): AreaResults {
+export function assessArea(area: Area, areas: readonly Area[], rooms: readonly RoomResults[]): Omit<AreaResults, 'judgement'> {
   const ids = subtree(area, areas);
   const own = rooms.filter((r) => r.areaId !== null && ids.has(r.areaId)).sort((a, b) => (a.roomId < b.roomId ? -1 : 1));
   const warnings: AnalysisWarning[] = [];
@@ -109,6 +111,5 @@ export function assessArea(area: Area, areas: readonly Area[], rooms: readonly R
         }
       : null,
     warnings,
-    judgement: null,
   };
 }

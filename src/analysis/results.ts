@@ -11,9 +11,9 @@
  * - 'assumed': a stated default (no reading, no record).
  * Numbers that cannot be given are null, never NaN or Infinity.
  *
- * Extension point: `judgement` on the results, each room and each area is null until the
- * criteria engine (Engine III) fills it with criteria checks, moisture, priority and fixes. It
- * reads the figures here and adds to them; it never recomputes them.
+ * Judgement (Engine III): `judgement` on the results, each room and each area holds the criteria
+ * checks, moisture and mould, safety items, priority with reasons, rank and sized fixes. It reads
+ * the figures here and adds to them; it never recomputes them.
  *
  * Example: analyseSurvey(demoDocument).rooms[0].headline.supply_m3s.basis = 'measured'.
  */
@@ -21,6 +21,15 @@ import type { AirflowMechanism } from '../core/airflow-item.ts';
 import type { VentilationMode } from '../core/room-natural-ventilation.ts';
 import type { EstimateKind, IntervalMethod, SupplyMethod } from '../core/supply-estimate.ts';
 import type { AnalysisWarning } from './analysis-warnings.ts';
+import type { CriterionEdit } from '../core/criteria/criterion-edits.ts';
+import type { CriterionCheck } from '../core/judgement/judge-criterion.ts';
+import type { RequiredSupply } from '../core/judgement/required-supply.ts';
+import type { RoomMoisture } from '../core/judgement/room-moisture.ts';
+import type { RoomMoistureRelease } from '../core/judgement/room-moisture-release.ts';
+import type { SafetyItem } from '../core/judgement/safety-items.ts';
+import type { FixPlan } from '../core/judgement/size-fixes.ts';
+import type { PriorityLevel, RoomPriority } from '../core/judgement/priority.ts';
+import type { VapourPressureExcessResult } from '../core/vapour-pressure-excess.ts';
 
 export type { AnalysisWarning, WarningSeverity } from './analysis-warnings.ts';
 
@@ -224,8 +233,8 @@ export interface RoomResults {
   /** What measurement would settle this room, when none was made (or none succeeded). */
   suggestion: string | null;
   warnings: AnalysisWarning[];
-  /** Engine III: criteria checks, moisture, priority and fixes. Null until then. */
-  judgement: null;
+  /** Engine III: criteria checks, moisture, safety, priority, rank and fixes. */
+  judgement: RoomJudgement;
 }
 
 export interface AreaResults {
@@ -245,7 +254,7 @@ export interface AreaResults {
   /** The dwelling system's supply and extract (core whole-dwelling-balance.ts), m³/s; null without one. */
   balance: { supply_m3s: Ranged; extract_m3s: Ranged; mismatch: number; madeUpThroughEnvelope_m3s: number } | null;
   warnings: AnalysisWarning[];
-  judgement: null;
+  judgement: AreaJudgement;
 }
 
 export interface WeatherCaseResult {
@@ -261,8 +270,8 @@ export interface AnalysisStamps {
   engineVersion: string;
   formatVersion: number;
   analysisVersion: string;
-  /** Criteria set and version, null until the criteria engine is in. */
-  criteria: null;
+  /** Criteria set, data version and the edits recorded for this survey. */
+  criteria: CriteriaStamp;
 }
 
 export interface AnalysisResults {
@@ -277,5 +286,69 @@ export interface AnalysisResults {
   rooms: RoomResults[];
   areas: AreaResults[];
   warnings: AnalysisWarning[];
-  judgement: null;
+  judgement: SurveyJudgement;
+}
+
+/** The criteria a survey was judged by. */
+export interface CriteriaStamp {
+  setId: string;
+  version: number;
+  /** Edits recorded for this survey and applied (shown beside the findings in the report). */
+  edits: CriterionEdit[];
+}
+
+/** What the room was judged as. */
+export interface JudgedAs {
+  buildingUse: string;
+  roomUse: string;
+  situation: 'new' | 'refurbished' | 'existing';
+  ventilation: 'natural' | 'mechanical' | 'hybrid' | 'unknown';
+  /** What had to be assumed to choose the criteria, in words. */
+  assumptions: string[];
+}
+
+/** Moisture and mould of a room: the core findings, the release behind them and any logged excess. */
+export interface RoomMoistureResults extends RoomMoisture {
+  release: RoomMoistureRelease;
+  /** Vapour-pressure excess from a temperature and humidity log, when there is one. */
+  logged: VapourPressureExcessResult | null;
+}
+
+/** Engine III for one room. */
+export interface RoomJudgement {
+  judgedAs: JudgedAs;
+  checks: CriterionCheck[];
+  /** The supply the room needs at the unfavourable end, m³/s, and what sets it; null when nothing does. */
+  required: (Omit<RequiredSupply, 'role'> & { role: RequiredSupply['role'] | 'moisture' | 'extract' }) | null;
+  moisture: RoomMoistureResults;
+  /** Safety items, kept apart and ranked above all else. */
+  safety: SafetyItem[];
+  priority: RoomPriority;
+  /** Severity for ranking (rank-rooms.ts): L/s short × people, plus 10 per m² of mould seen. */
+  severity: number;
+  /** 1 = first to act on, across the survey. */
+  rank: number;
+  /** Sized fixes; null when no target was set. */
+  fixes: FixPlan | null;
+  warnings: AnalysisWarning[];
+}
+
+/** Engine III for an area (a dwelling's whole-dwelling checks and priority). */
+export interface AreaJudgement {
+  checks: CriterionCheck[];
+  /** Extra whole-dwelling supply needed at the unfavourable end, m³/s; null without a target. */
+  extraNeeded_m3s: number | null;
+  /** The supply-extract balance in words, when the dwelling has a system. */
+  balance: string | null;
+  safety: { roomId: string; item: SafetyItem }[];
+  priority: { level: PriorityLevel; words: string; reasons: string[] };
+  warnings: AnalysisWarning[];
+}
+
+/** Engine III for the survey: the ranked rooms and every safety item. */
+export interface SurveyJudgement {
+  ranking: { roomId: string; rank: number; level: PriorityLevel; words: string; safetyItems: number; severity: number }[];
+  safety: { roomId: string; item: SafetyItem }[];
+  /** How many rooms at each level. */
+  levels: Record<PriorityLevel, number>;
 }

@@ -12,6 +12,7 @@ import type { AnalysisResults } from '../../src/analysis/results.ts';
 import { occupantCo2Output } from '../../src/core/co2-generation.ts';
 import { fitDecay } from '../../src/core/decay-fit.ts';
 import { ENGINE_VERSION } from '../../src/core/engine-version.ts';
+import { CRITERIA_DATA_VERSION } from '../../src/core/criteria/criteria-sets.ts';
 import { meterErrorFromStatedAccuracy } from '../../src/core/meter-error.ts';
 import { outdoorLevel } from '../../src/core/outdoor-level.ts';
 import { predictRoomSupplyOverCases } from '../../src/core/room-supply-prediction.ts';
@@ -44,9 +45,9 @@ describe('analyseSurvey on the demo file', () => {
     }
   });
 
-  it('stamps the engine, format and analysis versions, criteria null until Engine III', () => {
-    expect(results[0]!.stamps).toEqual({ engineVersion: ENGINE_VERSION, formatVersion: CURRENT_FORMAT_VERSION, analysisVersion: '0.1.0', criteria: null });
-    expect(results[0]!.judgement).toBeNull();
+  it('stamps the engine, format, analysis and criteria versions', () => {
+    expect(results[0]!.stamps).toEqual({ engineVersion: ENGINE_VERSION, formatVersion: CURRENT_FORMAT_VERSION, analysisVersion: '0.2.0', criteria: { setId: 'schools', version: CRITERIA_DATA_VERSION, edits: [] } });
+    expect(results[0]!.judgement.ranking).toHaveLength(results[0]!.rooms.length);
   });
 
   it('is plain JSON: a round trip gives the same object', () => {

@@ -1,34 +1,18 @@
 /**
  * analyseSurvey over 5,000 rooms: the invented demo surveys (test/fixtures/demo-survey.json)
  * copied with fresh room ids until they hold 5,000 rooms between them, each copy analysed as a
- * survey of its own (an estates team batching many sites), with every scenario and weather case.
+ * survey of its own (an estates team batching many sites), with every scenario and weather case,
+ * and Engine III's judgement (judgement.bench.ts measures that part alone).
  * Rooms per second, single thread, at the default Monte Carlo draws (1000) and reduced ones.
  */
 import type { BenchContext } from '../bench-context.ts';
 import { analyseSurvey, DEFAULT_DRAWS } from '../../../src/analysis/analyse-survey.ts';
-import type { SurveyDocument } from '../../../src/model/survey-document.ts';
-import { demoFile } from '../../support/fixtures.ts';
+import { demoCopies } from './demo-copies.ts';
 
 const ROOMS = 5000;
 
-/** Copies of the demo surveys with fresh room ids (the copy number in the id), 5,000 rooms in all. */
-function copies(): SurveyDocument[] {
-  const demos = demoFile().surveys as SurveyDocument[];
-  const out: SurveyDocument[] = [];
-  let rooms = 0;
-  for (let copy = 0; rooms < ROOMS; copy++) {
-    for (const doc of demos) {
-      if (rooms >= ROOMS) break;
-      const take = doc.rooms.slice(0, ROOMS - rooms);
-      out.push({ ...doc, rooms: take.map((r) => ({ ...r, id: `${r.id.slice(0, 24)}${copy.toString(16).padStart(6, '0')}${r.id.slice(30)}` })) });
-      rooms += take.length;
-    }
-  }
-  return out;
-}
-
 export default async function analysisBench(ctx: BenchContext): Promise<void> {
-  const surveys = copies();
+  const surveys = demoCopies(ROOMS);
   const rooms = surveys.reduce((s, d) => s + d.rooms.length, 0);
   for (const draws of [DEFAULT_DRAWS, 200, 50]) {
     analyseSurvey(surveys[0]!, { draws }); // warm-up
