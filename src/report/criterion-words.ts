@@ -36,7 +36,8 @@ const METRIC_KIND: Record<CriterionMetric, QuantityKind | null> = {
   'co2-absolute': 'co2',
   'co2-above-outdoor': 'co2',
   'flow-per-person': 'flowPerPerson',
-  'flow-per-person-and-area': 'flowPerPerson',
+  // Judged as the room's total outdoor air against q_p·people + q_B·floor area.
+  'flow-per-person-and-area': 'flow',
   'flow-per-floor-area': 'flowPerArea',
   'whole-dwelling-flow': 'flow',
   'extract-flow': 'flow',

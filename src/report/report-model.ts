@@ -107,6 +107,10 @@ export interface RoomSheet {
     profile: string[];
     reconciliation: string[];
     checks: { criterion: string; status: string; period: string; value: string; limit: string; finding: string }[];
+    /** What would settle the checks left uncertain or not assessed, once each. */
+    settleBy: string[];
+    /** Duties that apply but no reading can test (fitness for habitation, hazard rating), by name. */
+    duties: string[];
     cautions: string[];
   };
   moisture: string[];

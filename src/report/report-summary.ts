@@ -14,7 +14,7 @@ import type { ReportJudgementView, ReportUrgency } from './judgement-view.ts';
 import type { RankedRoom, ReportSummary, SafetyLine } from './report-model.ts';
 import { PRIORITY_WORDS, URGENCY_WORDS } from './room-ranking.ts';
 import { roomPlace } from './room-place.ts';
-import { safetyObservations } from './safety-observations.ts';
+import { roomSafetyLines } from './safety-observations.ts';
 
 /** How many rooms the summary names as the worst. */
 export const WORST_SHOWN = 5;
@@ -29,9 +29,7 @@ export function summaryOf(
   const safety: SafetyLine[] = [];
   for (const room of doc.rooms) {
     const place = roomPlace(doc, room);
-    const judged = judgement?.rooms.get(room.id)?.safety ?? [];
-    for (const text of judged) safety.push({ place, text, judged: true });
-    for (const text of safetyObservations(room)) if (!judged.includes(text)) safety.push({ place, text: `${text} (recorded on the day)`, judged: false });
+    for (const line of roomSafetyLines(room, judgement ? (judgement.rooms.get(room.id)?.safety ?? []) : null)) safety.push({ place, ...line });
   }
   const actions: ReportSummary['actions'] = [];
   if (judgement) {
@@ -56,7 +54,7 @@ export function summaryOf(
       ? 'Priorities, urgencies and fixes below are the judgement of each room against the criteria that apply to its use and situation (see the criteria table).'
       : 'The criteria judgement was not available when this report was made, so this summary gives no verdict on any room: it lists the safety items recorded on the day, the rooms with the least outdoor air per person, and the measurements that would settle the rooms that were not measured.',
     safety,
-    worst: ranked.filter((r) => r.priority !== 'none').slice(0, WORST_SHOWN),
+    worst: ranked.filter((r) => r.priority !== 'no-action-found').slice(0, WORST_SHOWN),
     actions,
     counts: [
       { label: 'Rooms surveyed', count: results.rooms.length },

@@ -10,23 +10,17 @@
  */
 import type { AnalysisResults, RoomResults } from '../analysis/results.ts';
 import { roomUseLabel, type RoomUse } from '../core/room-uses.ts';
+import { roundToStep } from '../core/units.ts';
 import type { SurveyDocument } from '../model/survey-document.ts';
 import { metricKind, periodWords, statusWords } from './criterion-words.ts';
-import type { ReportCheckView, ReportJudgementView, ReportPriority, ReportUrgency } from './judgement-view.ts';
+import { REPORT_PRIORITIES, type ReportCheckView, type ReportJudgementView, type ReportPriority, type ReportUrgency } from './judgement-view.ts';
 import { displayNumber, rangeText, reportFigure } from './report-figure.ts';
 import type { RankedRoom } from './report-model.ts';
 import { roomPlace } from './room-place.ts';
 
-const PRIORITY_ORDER: readonly ReportPriority[] = ['safety', 'high', 'medium', 'low', 'none'];
-const URGENCY_ORDER: readonly ReportUrgency[] = ['immediate', 'weeks', 'planned', 'none'];
-
-/** Priority in words, text first (never colour alone). */
+/** Priority in words, text first (never colour alone): the judgement's own words. */
 export const PRIORITY_WORDS: Record<ReportPriority | 'not-judged', string> = {
-  safety: 'Safety: act now',
-  high: 'High',
-  medium: 'Medium',
-  low: 'Low',
-  none: 'No action',
+  ...(Object.fromEntries(REPORT_PRIORITIES.map((p) => [p.level, p.words])) as Record<ReportPriority, string>),
   'not-judged': 'Not judged',
 };
 
@@ -58,14 +52,16 @@ function byFigure(a: RoomResults, b: RoomResults): number {
 /** A check's value or limit in display units. */
 export function checkValueText(check: ReportCheckView, which: 'value' | 'limit'): string {
   const kind = metricKind(check.metric);
+  // A share of floor area (openable windows for purge) reads as a percentage.
+  const fraction = (x: number | null) => (x === null ? '—' : `${roundToStep(x * 100, 0.1)} % of floor area`);
   if (which === 'limit') {
     if (check.limit === null) return '—';
-    if (!kind) return String(check.limit);
+    if (!kind) return check.metric === 'opening-area-fraction' ? fraction(check.limit) : String(check.limit);
     const limit = reportFigure('', { value: check.limit, low: null, high: null }, kind);
     return `${check.metric === 'co2-above-outdoor' ? 'above outdoor ' : ''}${rangeText(limit.value, null, null, limit.unit)}`;
   }
   if (!check.value) return '—';
-  if (!kind) return String(check.value.value ?? '—');
+  if (!kind) return check.metric === 'opening-area-fraction' ? fraction(check.value.value ?? check.value.low) : String(check.value.value ?? '—');
   const v = reportFigure('', check.value, kind);
   return v.text;
 }
@@ -80,14 +76,10 @@ export function rankRooms(doc: SurveyDocument, results: AnalysisResults, judgeme
   const docRoom = (id: string) => doc.rooms.find((r) => r.id === id)!;
   const rooms = results.rooms.map((r, i) => ({ r, i }));
   rooms.sort((x, y) => {
-    if (judgement) {
-      const jx = judgement.rooms.get(x.r.roomId);
-      const jy = judgement.rooms.get(y.r.roomId);
-      const p = PRIORITY_ORDER.indexOf(jx?.priority ?? 'none') - PRIORITY_ORDER.indexOf(jy?.priority ?? 'none');
-      if (p !== 0) return p;
-      const u = URGENCY_ORDER.indexOf(jx?.urgency ?? 'none') - URGENCY_ORDER.indexOf(jy?.urgency ?? 'none');
-      if (u !== 0) return u;
-    }
+    // With a judgement, its ranking is the order (safety, priority, severity): the report never re-ranks.
+    const jx = judgement?.rooms.get(x.r.roomId);
+    const jy = judgement?.rooms.get(y.r.roomId);
+    if (jx && jy) return jx.rank - jy.rank;
     return byFigure(x.r, y.r) || x.i - y.i;
   });
   const rows = rooms.map(({ r }, index): RankedRoom => {
@@ -112,7 +104,7 @@ export function rankRooms(doc: SurveyDocument, results: AnalysisResults, judgeme
     return {
       ...common,
       priority: j.priority,
-      priorityText: PRIORITY_WORDS[j.priority],
+      priorityText: j.priorityWords,
       urgency: j.urgency,
       criterion: check ? `${check.title} (${statusWords(check.status)}; ${periodWords(check.period)})` : '—',
       value: check ? checkValueText(check, 'value') : figure.text,
@@ -123,7 +115,7 @@ export function rankRooms(doc: SurveyDocument, results: AnalysisResults, judgeme
     };
   });
   return {
-    basis: judgement ? 'Rooms are listed by priority (safety items first), then by how soon to act, then by outdoor air per person at the low end of its range.' : UNJUDGED_ORDER,
+    basis: judgement ? 'Rooms are listed in the judgement’s order: safety items first, then priority, then severity (outdoor air short of the target times the people affected, plus mould seen).' : UNJUDGED_ORDER,
     rows,
   };
 }

@@ -11,8 +11,8 @@ import type { AnalysisResults, MeasuredEstimate, RoomResults, ScenarioId } from 
 import { roomUseLabel, type RoomUse } from '../core/room-uses.ts';
 import { displayQuantity } from '../core/units.ts';
 import type { DocumentRoom, SurveyDocument } from '../model/survey-document.ts';
-import { periodWords, sourceWords, statusWords } from './criterion-words.ts';
-import type { ReportJudgementView } from './judgement-view.ts';
+import { periodWords, statusWords } from './criterion-words.ts';
+import type { ReportCheckView, ReportJudgementView } from './judgement-view.ts';
 import { BASIS_WORDS, boundsFigure, displayNumber, numberText, rangeText, reportFigure, type ReportFigure } from './report-figure.ts';
 import type { ReportChart, RoomSheet } from './report-model.ts';
 import { clockSeconds, recordedClock, recordedDate } from './recorded-time.ts';
@@ -20,7 +20,7 @@ import { defectWords, openingWords, scheduleWords } from './record-words.ts';
 import { checkValueText, PRIORITY_WORDS } from './room-ranking.ts';
 import { METHOD_WORDS } from './method-words.ts';
 import { roomPlace } from './room-place.ts';
-import { applianceWords, safetyObservations } from './safety-observations.ts';
+import { applianceWords, roomSafetyLines } from './safety-observations.ts';
 
 /** At most this many cautions on a sheet (the rest are counted), so a sheet stays within two pages. */
 export const CAUTIONS_SHOWN = 6;
@@ -105,7 +105,8 @@ function profileLines(room: RoomResults, results: AnalysisResults): string[] {
 
 function dayChart(doc: SurveyDocument, room: DocumentRoom, results: AnalysisResults, result: RoomResults): ReportChart | null {
   const readings = room.readings.filter((r) => r.co2_ppm !== undefined).sort((a, b) => Date.parse(a.time) - Date.parse(b.time));
-  if (readings.length === 0) return null;
+  // A chart of one or two readings says nothing a table row does not: leave the page to the findings.
+  if (readings.length < 3) return null;
   const day = readings[0]!.time.slice(0, 10);
   const times = readings.map((r) => clockSeconds(r.time, day));
   const values = readings.map((r) => r.co2_ppm!);
@@ -157,6 +158,13 @@ function moistureLines(room: DocumentRoom, judged: string[] | undefined): string
 }
 
 /** Build one room's sheet. */
+const OUTCOME_WORDS_CHECK: Record<ReportCheckView['outcome'], string> = {
+  meets: 'meets it',
+  short: 'does not meet it',
+  uncertain: 'uncertain',
+  'not-assessed': 'not assessed',
+};
+
 export function buildRoomSheet(doc: SurveyDocument, results: AnalysisResults, room: RoomResults, judgement: ReportJudgementView | null): RoomSheet {
   const record = doc.rooms.find((r) => r.id === room.roomId)!;
   const j = judgement?.rooms.get(room.roomId);
@@ -165,9 +173,10 @@ export function buildRoomSheet(doc: SurveyDocument, results: AnalysisResults, ro
   const rows = measurementRows(room);
   const best = room.measured.find((m) => m.setId === room.bestMeasuredSetId);
   const outdoor = best?.outdoor ?? { ...results.outdoor, sameMeterAsRoom: false };
-  const cautions = room.warnings.filter((w) => w.severity !== 'info').map((w) => (w.severity === 'error' ? `Not used: ${w.message}` : w.message));
+  // Disagreements with the prediction are already stated under measured-against-predicted.
+  const cautions = [...new Set(room.warnings.filter((w) => w.severity !== 'info' && w.code !== 'disagrees-with-prediction').map((w) => (w.severity === 'error' ? `Not used: ${w.message}` : w.message)))];
   const shownCautions = cautions.length > CAUTIONS_SHOWN ? [...cautions.slice(0, CAUTIONS_SHOWN), `and ${cautions.length - CAUTIONS_SHOWN} more in the analysis results.`] : cautions;
-  const safety = [...(j?.safety ?? []), ...safetyObservations(record).filter((s) => !(j?.safety ?? []).includes(s))];
+  const safety = roomSafetyLines(record, judgement ? (j?.safety ?? []) : null).map((l) => l.text);
   const weatherLabel = (id: string) => results.weatherCases.find((w) => w.id === id)?.label ?? id;
   return {
     roomId: room.roomId,
@@ -216,14 +225,17 @@ export function buildRoomSheet(doc: SurveyDocument, results: AnalysisResults, ro
       reconciliation: room.reconciliation
         .filter((r) => r.outcome !== 'not-compared')
         .map((r) => `The ${METHOD_WORDS[r.method].name.toLowerCase()} measurement ${OUTCOME_WORDS[r.outcome]} the prediction for its recorded state (${r.predictedUnder}). ${r.explanation}`),
-      checks: (j?.checks ?? []).map((c) => ({
-        criterion: `${c.title}${c.caveat ? ` (${c.caveat})` : ''}`,
-        status: `${statusWords(c.status)}; ${sourceWords(c.source)}`,
+      checks: (j?.checks ?? []).filter((c) => c.metric !== 'qualitative-duty').map((c) => ({
+        // The source and any "not yet confirmed" caveat are in the criteria table; * marks a caveat.
+        criterion: `${c.title}${c.caveat ? ' *' : ''}`,
+        status: `${statusWords(c.status)} (${c.role})`,
         period: periodWords(c.period),
         value: checkValueText(c, 'value'),
         limit: checkValueText(c, 'limit'),
-        finding: c.words,
+        finding: OUTCOME_WORDS_CHECK[c.outcome],
       })),
+      settleBy: [...new Set((j?.checks ?? []).flatMap((c) => ((c.outcome === 'uncertain' || c.outcome === 'not-assessed') && c.settleBy ? [c.settleBy] : [])))],
+      duties: (j?.checks ?? []).filter((c) => c.metric === 'qualitative-duty').map((c) => `${c.title} (${statusWords(c.status)})`),
       cautions: shownCautions,
     },
     moisture: moistureLines(record, j?.moisture),

@@ -4,7 +4,7 @@
  * mould. They are observations, not the judgement's verdict; the summary lists them apart from
  * improvements (practice.md §3) whether or not the judgement is available.
  *
- * Example: a kitchen with an open-flued gas boiler and no CO alarm gives
+* Example: a kitchen with an open-flued gas boiler and no CO alarm gives hazards
  * ['Gas boiler (open-flued): no carbon monoxide alarm found'].
  */
 import type { DocumentRoom } from '../model/survey-document.ts';
@@ -33,9 +33,23 @@ export function applianceWords(a: DocumentRoom['appliances'][number]): string {
   return `${APPLIANCE_WORDS[a.kind] ?? a.kind} (${FLUE_WORDS[a.flue] ?? a.flue})`;
 }
 
-/** The safety observations recorded for one room. */
-export function safetyObservations(room: DocumentRoom): string[] {
+/**
+ * A room's safety lines for the report: the judgement's safety items when there is a judgement
+ * (it reads the same records and states who should act), otherwise the hazards as recorded; and
+ * in both cases the paperwork not seen (a gas safety record), which the judgement does not rate.
+ */
+export function roomSafetyLines(room: DocumentRoom, judged: readonly string[] | null): { text: string; judged: boolean }[] {
+  const { hazards, paperwork } = safetyObservations(room);
+  return [
+    ...(judged ? judged.map((text) => ({ text, judged: true })) : hazards.map((text) => ({ text: `${text} (recorded on the day)`, judged: false }))),
+    ...paperwork.map((text) => ({ text: `${text} (recorded on the day)`, judged: false })),
+  ];
+}
+
+/** The safety observations recorded for one room: hazards, and paperwork not seen. */
+export function safetyObservations(room: DocumentRoom): { hazards: string[]; paperwork: string[] } {
   const out: string[] = [];
+  const paperwork: string[] = [];
   for (const a of room.appliances) {
     const name = applianceWords(a);
     const needsAir = a.flue === 'open-flued' || a.flue === 'flueless' || a.flue === 'not-known';
@@ -43,7 +57,7 @@ export function safetyObservations(room: DocumentRoom): string[] {
     if (needsAir && a.combustionAirVentClear === 'no') out.push(`${name}: combustion-air vent not clear`);
     if (a.coAlarmPresent === 'no') out.push(`${name}: no carbon monoxide alarm found`);
     else if (a.coAlarmTested === 'no') out.push(`${name}: carbon monoxide alarm not working when tested`);
-    if (a.gasSafetyRecordSeen === 'no') out.push(`${name}: gas safety record not seen`);
+    if (a.gasSafetyRecordSeen === 'no') paperwork.push(`${name}: gas safety record not seen`);
     if (a.flue === 'flueless' || a.kind === 'unflued-heater') out.push(`${name}: burns into the room; its fumes and moisture stay in the room`);
   }
   for (const o of room.openings) {
@@ -53,5 +67,5 @@ export function safetyObservations(room: DocumentRoom): string[] {
   }
   const mould = room.defects.some((d) => d.kind === 'mould');
   if (mould && room.defects.some((d) => d.kind === 'fan-dead')) out.push('Extract fan not working in a room with mould');
-  return out;
+  return { hazards: out, paperwork };
 }

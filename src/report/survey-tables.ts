@@ -102,7 +102,7 @@ export function criteriaRows(doc: SurveyDocument, judgement: ReportJudgementView
   const rows = new Map<string, string[]>();
   if (judgement) {
     for (const room of judgement.rooms.values()) {
-      for (const c of room.checks) rows.set(c.criterionId, [c.title, sourceWords(c.source), statusWords(c.status), periodWords(c.period), c.caveat || 'confirmed', 'see the room sheets']);
+      for (const c of room.checks) rows.set(c.criterionId, [c.title, c.source, `${statusWords(c.status)} (${c.role})`, periodWords(c.period), c.caveat || 'confirmed', 'see the room sheets']);
     }
     return { note: 'The criteria each room was judged against.', rows: [...rows.values()] };
   }

@@ -84,7 +84,8 @@ describe('buildReport on the demo surveys', () => {
   it('without a judgement gives no verdict, ranks by air per person at the low end, and says so', () => {
     const doc = docs()[1]!;
     const results = analyseSurvey(doc, { draws: DRAWS });
-    const model = buildReport(doc, results, OPTIONS);
+    // As if the criteria judgement had not run (judgement: null): the report must not invent one.
+    const model = buildReport(doc, results, { ...OPTIONS, judgement: null });
     expect(model.summary.judgementAvailable).toBe(false);
     expect(model.summary.basis).toMatch(/judgement was not available/);
     expect(model.ranked.rows.every((r) => r.priority === 'not-judged')).toBe(true);
@@ -103,15 +104,19 @@ describe('buildReport on the demo surveys', () => {
     const doc = docs()[0]!;
     const results = analyseSurvey(doc, { draws: DRAWS });
     const [a, b, c] = results.rooms;
-    const room = (priority: ReportRoomJudgementView['priority']): ReportRoomJudgementView => ({
+    const room = (priority: ReportRoomJudgementView['priority'], rank: number): ReportRoomJudgementView => ({
       priority,
-      urgency: priority === 'safety' ? 'immediate' : 'planned',
+      priorityWords: priority === 'act-now' ? 'Act now' : 'Plan an improvement',
+      urgency: priority === 'act-now' ? 'immediate' : 'planned',
+      rank,
+      reasons: [],
       checks: [
         {
           criterionId: 'x',
           title: 'Daily mean CO2 in teaching hours',
-          source: { document: 'Invented test document', edition: '2026' },
+          source: 'Invented test document (2026)',
           status: 'design-guidance-new-work',
+          role: 'benchmark',
           period: 'occupied-day-mean',
           metric: 'co2-absolute',
           caveat: '',
@@ -119,18 +124,19 @@ describe('buildReport on the demo surveys', () => {
           value: { value: 1612, low: 1490, high: 1800 },
           outcome: 'uncertain',
           words: 'The range straddles the limit.',
+          settleBy: 'A 20-minute decay test would decide this.',
         },
       ],
       moisture: [],
-      safety: priority === 'safety' ? ['Test safety item'] : [],
+      safety: priority === 'act-now' ? ['Test safety item'] : [],
       fixes: [{ title: 'Open the vents', extraSupply_m3s: 0.0523, items: ['two vents'], safetyNotes: [], urgency: 'weeks' }],
     });
     const judgement: ReportJudgementView = {
       criteriaVersion: 'test v1',
       rooms: new Map([
-        [a!.roomId, room('low')],
-        [b!.roomId, room('medium')],
-        [c!.roomId, room('safety')],
+        [a!.roomId, room('plan-improvement', 3)],
+        [b!.roomId, room('plan-improvement', 2)],
+        [c!.roomId, room('act-now', 1)],
       ]),
       areas: new Map(),
     };

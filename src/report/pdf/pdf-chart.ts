@@ -11,7 +11,7 @@ import { FILL_PERIOD, INK, MUTED, RULE, TYPE } from './pdf-style.ts';
 import type { PdfWriter } from './pdf-writer.ts';
 
 /** Height of a chart on the page, points. */
-export const CHART_HEIGHT = 190;
+export const CHART_HEIGHT = 130;
 
 export function drawChart(w: PdfWriter, chart: ReportChart, height = CHART_HEIGHT): void {
   const caption = w.wrap(chart.caption, TYPE.small);

@@ -86,9 +86,18 @@ export function drawRoomSheet(w: PdfWriter, sheet: RoomSheet): void {
   if (sheet.interpretation.reconciliation.length) w.list(sheet.interpretation.reconciliation, { size: TYPE.small });
   if (sheet.interpretation.checks.length) {
     w.table(
-      ['Criterion', 'Status and source', 'Averaging', 'This room', 'Limit', 'Finding'],
+      ['Criterion', 'Status', 'Averaging', 'This room', 'Limit', 'Finding'],
       sheet.interpretation.checks.map((c) => [c.criterion, c.status, c.period, c.value, c.limit, c.finding]),
     );
+    if (sheet.interpretation.checks.some((c) => c.criterion.endsWith(' *'))) {
+      w.paragraph('* Not yet confirmed against its source document: see the criteria table for the source.', { size: TYPE.small, colour: MUTED });
+    }
+  }
+  if (sheet.interpretation.settleBy.length) {
+    w.paragraph(`To settle the open checks: ${sheet.interpretation.settleBy.join(' ')}`, { size: TYPE.small });
+  }
+  if (sheet.interpretation.duties.length) {
+    w.paragraph(`Duties that also apply, which readings cannot test: ${sheet.interpretation.duties.join('; ')}.`, { size: TYPE.small });
   }
   if (sheet.interpretation.cautions.length) {
     w.paragraph('Cautions on these figures', { bold: true, after: 0, size: TYPE.small });
