@@ -25,6 +25,7 @@ import type { Area } from '../model/area.ts';
 import type { OccupantGroupRecord } from '../model/occupancy.ts';
 import { roomSchema, type Room } from '../model/room.ts';
 import type { Geometry } from '../model/room-geometry.ts';
+import { blankRoomParts } from '../model/room-defaults.ts';
 import type { RoomUse } from '../core/room-uses.ts';
 import { decodeFileBytes } from './decode-file-bytes.ts';
 import { parseDecimalNumber, type DecimalSeparator } from './decimal-number.ts';
@@ -141,7 +142,7 @@ export function readRoomList(input: string | Uint8Array, options: RoomListOption
   const { columns, roles } = detectRoomListColumns(names, data.slice(0, 200).map((d) => d.row), options.columns);
   report.columns = columns;
   const missing = (role: RoomListRole) => `The room list has no column for the ${ROOM_LIST_ROLE_LABELS[role]}`;
-  const columnList = (names.join(', ') || 'none');
+  const columnList = names.join(', ') || 'none';
   if (roles.room === undefined) return fail(`${missing('room')}: name one "Room" (columns found: ${columnList}).`);
   if (roles.height === undefined && roles.dimensions === undefined) return fail(`${missing('height')}: name one "Height (m)" (columns found: ${columnList}).`);
   if (roles['floor-area'] === undefined && roles.dimensions === undefined && (roles.length === undefined || roles.width === undefined)) {
@@ -167,7 +168,7 @@ export function readRoomList(input: string | Uint8Array, options: RoomListOption
     let parent: string | undefined;
     for (const name of path.split(AREA_SEPARATOR).map((n) => n.trim()).filter(Boolean)) {
       const key = `${parent ?? ''}|${name.toLowerCase()}`;
-      let id = areaIds.get(key) ?? (parent === undefined ? areaIds.get(`|${name.toLowerCase()}`) : undefined);
+      let id = areaIds.get(key);
       if (!id) {
         id = options.newId();
         areas.push({ id, ...(parent ? { parentId: parent } : {}), kind: areaKind(name), name, clientRef: '', notes: '' });
@@ -238,15 +239,8 @@ export function readRoomList(input: string | Uint8Array, options: RoomListOption
         clientRef: cell('client-ref'),
         use,
         geometry,
-        exposedWalls: [],
+        ...blankRoomParts(),
         occupants: count ? [{ id: options.newId(), ...occupants, count }] : [],
-        schedule: { template: '', periods: [] },
-        openings: [],
-        appliances: [],
-        defects: [],
-        interview: [],
-        tests: [],
-        notes: '',
         updatedAt: options.now,
       };
       const checked = roomSchema.safeParse(candidate);

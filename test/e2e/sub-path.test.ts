@@ -10,7 +10,7 @@ import { readFile } from 'node:fs/promises';
 import { extname, join, normalize } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openPhone } from '../support/browser.ts';
+import { expectOfflineStart, openPhone } from '../support/browser.ts';
 
 const baseURL = inject('baseURL');
 const DIST = fileURLToPath(new URL('../../dist/', import.meta.url));
@@ -105,14 +105,7 @@ describe.skipIf(!baseURL)('the built app under a sub-path', () => {
   it('starts with the network off and the server gone', async () => {
     await new Promise((resolve) => server.close(resolve));
     server.closeAllConnections();
-    await context.setOffline(true);
-    try {
-      await page.reload();
-      await page.getByRole('heading', { name: 'Start a survey' }).waitFor();
-      await page.getByText('Offline — working on this device').waitFor();
-    } finally {
-      await context.setOffline(false);
-    }
+    await expectOfflineStart(context, page);
   });
 
   it('asked for nothing outside the sub-path', () => {
