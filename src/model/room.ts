@@ -39,6 +39,8 @@ export const roomSchema = z.strictObject({
   tests: z.array(roomTestSchema),
   notes: text('Room notes', MAX_NOTE_LENGTH),
   updatedAt: dateTime,
+  /** The same room in the survey this one started from (`survey.previousSurveyId`), by id. */
+  previousRoomId: recordId.optional(),
 });
 
 export type Room = z.infer<typeof roomSchema>;

@@ -136,6 +136,11 @@ export const surveySchema = z.strictObject({
   issued: z.array(issuedRevisionSchema),
   createdAt: dateTime,
   updatedAt: dateTime,
+  /**
+   * The earlier survey of the same building this one started from (repeat-visit.ts), by id.
+   * It may no longer be on the device: it is a link for comparison, not a reference checked on import.
+   */
+  previousSurveyId: recordId.optional(),
 });
 
 export type Survey = z.infer<typeof surveySchema>;

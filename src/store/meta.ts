@@ -1,6 +1,6 @@
 /**
- * Small facts the app keeps about itself in the meta store: when the last backup was made, and
- * which survey and room were open (so a cold start reopens there). Each is checked on reading,
+ * Small facts the app keeps about itself in the meta store: when the last backup was made,
+ * which survey and room were open (so a cold start reopens there), and how long surveys are kept. Each is checked on reading,
  * so a damaged entry reads as "not known" instead of breaking the app.
  */
 import type { Connection } from './connection.ts';
@@ -15,6 +15,8 @@ export interface MetaFacts {
   /** ISO date and time of the last backup exported. */
   lastBackupAt: string;
   lastOpen: LastOpen;
+  /** How long the surveyor keeps surveys on the phone, in whole months (1-120): older ones are pointed out. */
+  retentionMonths: number;
 }
 
 const CHECKS: { [K in keyof MetaFacts]: (value: unknown) => value is MetaFacts[K] } = {
@@ -24,6 +26,7 @@ const CHECKS: { [K in keyof MetaFacts]: (value: unknown) => value is MetaFacts[K
     value !== null &&
     typeof (value as LastOpen).surveyId === 'string' &&
     ['string', 'undefined'].includes(typeof (value as LastOpen).roomId),
+  retentionMonths: (value): value is number => Number.isInteger(value) && (value as number) >= 1 && (value as number) <= 120,
 };
 
 export async function readMeta<K extends keyof MetaFacts>(connection: Connection, key: K): Promise<MetaFacts[K] | undefined> {

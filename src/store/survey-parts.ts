@@ -23,7 +23,7 @@ import { commitNow, queue } from './write-requests.ts';
 type PartTx = IDBPTransaction<VentwalkDB, ('surveys' | SurveyPartStore)[], 'readwrite'>;
 
 /** The position after the last record of a survey in a store (0 for the first). */
-async function nextPosition(tx: PartTx, store: SurveyPartStore, surveyId: string): Promise<number> {
+export async function nextPosition(tx: PartTx, store: SurveyPartStore, surveyId: string): Promise<number> {
   const cursor = await tx.objectStore(store).index('bySurvey').openKeyCursor(ofSurvey(surveyId), 'prev');
   return cursor ? (cursor.key as [string, number])[1] + 1 : 0;
 }

@@ -5,7 +5,7 @@
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openPhone } from '../support/browser.ts';
+import { expectOfflineStart, openPhone } from '../support/browser.ts';
 import { axeViolations } from '../support/axe.ts';
 
 const baseURL = inject('baseURL');
@@ -45,14 +45,7 @@ describe.skipIf(!baseURL)('app shell in Chromium (phone)', () => {
   });
 
   it('starts with no network at all', async () => {
-    await context.setOffline(true);
-    try {
-      await page.reload();
-      await page.getByRole('heading', { name: 'Start a survey' }).waitFor();
-      await page.getByText('Offline — working on this device').waitFor();
-    } finally {
-      await context.setOffline(false);
-    }
+    await expectOfflineStart(context, page);
   });
 
   it('keeps a new survey across a reload, offline', async () => {

@@ -5,7 +5,7 @@
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium, type Browser, type BrowserContext } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
 /** Flags proven on this machine as root, without network (toolchain notes). */
 export const CHROMIUM_ARGS = [
@@ -60,4 +60,16 @@ export async function openPhone(): Promise<{ context: BrowserContext; close: () 
       rmSync(profile, { recursive: true, force: true });
     },
   };
+}
+
+/** With the network off, reload the page and wait for the start screen and the offline notice. */
+export async function expectOfflineStart(context: BrowserContext, page: Page): Promise<void> {
+  await context.setOffline(true);
+  try {
+    await page.reload();
+    await page.getByRole('heading', { name: 'Start a survey' }).waitFor();
+    await page.getByText('Offline — working on this device').waitFor();
+  } finally {
+    await context.setOffline(false);
+  }
 }

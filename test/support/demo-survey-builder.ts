@@ -18,6 +18,7 @@ import type { Opening } from '../../src/model/opening.ts';
 import type { LoggerSeries } from '../../src/model/logger-series.ts';
 import type { Survey } from '../../src/model/survey.ts';
 import { newSurveyRecord } from '../../src/model/survey-defaults.ts';
+import { blankRoomParts } from '../../src/model/room-defaults.ts';
 
 /** Deterministic ids: dea1xxxx-… (version 4, variant 8), numbered in the order they are made. */
 function idMaker(): () => string {
@@ -114,15 +115,7 @@ function room(partial: Partial<DocumentRoom> & Pick<DocumentRoom, 'name' | 'use'
   return {
     id: id(),
     clientRef: '',
-    exposedWalls: [],
-    occupants: [],
-    schedule: { template: '', periods: [] },
-    openings: [],
-    appliances: [],
-    defects: [],
-    interview: [],
-    tests: [],
-    notes: '',
+    ...blankRoomParts(),
     updatedAt: '2026-01-14T17:00:00Z',
     readings: [],
     ...partial,
