@@ -4,19 +4,16 @@
  * The judgement is filled by the criteria engine; where it is absent (null, or an older result
  * without it) every fact here is null or empty, and the comparison says "not judged".
  *
- * Read structurally (the judgement's own types live with the criteria engine): priority
- * `{ level, words }` and `rank`; mould `moisture.mould.verdict` with the coldest wall's surface
- * RH at the favourable and unfavourable ends, `moisture.wallSurfaceRh_pct`, %; fixes
- * `fixes.options[]` and `fixes.supporting[]`, each `{ kind, title }`.
- *
  * Example: judgementFacts({ judgement: null }) = { judged: false, priority: null, mould: null, fixes: [] }.
  */
-import type { Ranged } from './results.ts';
+import { PRIORITY_LEVELS } from '../core/judgement/priority.ts';
+import type { RoomMouldVerdict } from '../core/judgement/room-moisture.ts';
+import type { Ranged, RoomJudgement } from './results.ts';
 
-/** Priority levels from most to least urgent (the criteria engine's own ids). */
-export const PRIORITY_ORDER: readonly string[] = ['act-now', 'act-within-weeks', 'plan-improvement', 'no-action-found'];
+/** Priority levels from most to least urgent (the criteria engine's own order). */
+export const PRIORITY_ORDER: readonly string[] = PRIORITY_LEVELS.map((p) => p.level);
 /** Mould verdicts from worst to best; 'not-established' is not on the scale. */
-export const MOULD_ORDER: readonly string[] = ['mould-observed', 'risk', 'uncertain', 'no-risk-predicted'];
+export const MOULD_ORDER: readonly Exclude<RoomMouldVerdict, 'not-established'>[] = ['mould-observed', 'risk', 'uncertain', 'no-risk-predicted'];
 
 export interface JudgementFacts {
   /** False when the room carries no judgement at all. */
@@ -28,31 +25,15 @@ export interface JudgementFacts {
   fixes: { kind: string; title: string }[];
 }
 
-interface JudgementShape {
-  priority?: { level?: unknown; words?: unknown };
-  rank?: unknown;
-  moisture?: { mould?: { verdict?: unknown }; wallSurfaceRh_pct?: { favourable?: unknown; central?: unknown; unfavourable?: unknown } };
-  fixes?: { options?: { kind?: unknown; title?: unknown }[]; supporting?: { kind?: unknown; title?: unknown }[] } | null;
-}
-
-const numberOrNull = (x: unknown): number | null => (typeof x === 'number' && Number.isFinite(x) ? x : null);
-
-export function judgementFacts(room: { judgement: unknown }): JudgementFacts {
-  const j = (typeof room.judgement === 'object' && room.judgement !== null ? room.judgement : {}) as JudgementShape;
-  const level = j.priority?.level;
-  const verdict = j.moisture?.mould?.verdict;
-  const wall = j.moisture?.wallSurfaceRh_pct;
-  const listed = [...(j.fixes?.options ?? []), ...(j.fixes?.supporting ?? [])];
+/** The facts, or nothing when the room has no judgement (results made before it existed). */
+export function judgementFacts(room: { judgement: RoomJudgement | null }): JudgementFacts {
+  const j = room.judgement;
+  if (!j) return { judged: false, priority: null, mould: null, fixes: [] };
+  const wall = j.moisture.wallSurfaceRh_pct;
   return {
-    judged: typeof room.judgement === 'object' && room.judgement !== null,
-    priority: typeof level === 'string' ? { level, words: typeof j.priority?.words === 'string' ? j.priority.words : level, rank: numberOrNull(j.rank) } : null,
-    mould:
-      typeof verdict === 'string'
-        ? {
-            verdict,
-            wallSurfaceRh_pct: wall ? { value: numberOrNull(wall.central), low: numberOrNull(wall.favourable), high: numberOrNull(wall.unfavourable) } : null,
-          }
-        : null,
-    fixes: listed.flatMap((f) => (typeof f.kind === 'string' ? [{ kind: f.kind, title: typeof f.title === 'string' ? f.title : f.kind }] : [])),
+    judged: true,
+    priority: { level: j.priority.level, words: j.priority.words, rank: j.rank },
+    mould: { verdict: j.moisture.mould.verdict, wallSurfaceRh_pct: { value: wall.central, low: wall.favourable, high: wall.unfavourable } },
+    fixes: [...(j.fixes?.options ?? []), ...(j.fixes?.supporting ?? [])].map((f) => ({ kind: f.kind, title: f.title })),
   };
 }
