@@ -102,10 +102,15 @@ export function fitBuildUpKnownOutput<C>(input: BuildUpInput<C>): SupplyEstimate
       warn('rate-not-determined', 'The readings do not pin down the supply (the rise is too short, or the level is flat).'),
     );
   }
+  // A draw that moves only the fit's own error needs no refit: reuse the nominal fit then.
+  const nominalX = nominalInputs(u, 0);
+  const sameFit = (x: TrueInputs) =>
+    x.offset_ppm === nominalX.offset_ppm && x.gain === nominalX.gain && x.outdoor_ppm === nominalX.outdoor_ppm &&
+    x.volume_m3 === nominalX.volume_m3 && x.count === nominalX.count && x.perPerson_m3s === nominalX.perPerson_m3s;
   const figures = linearisedFigures(
     u,
     (x) => {
-      const fit = fitFor(x, nominal.rate);
+      const fit = sameFit(x) ? nominal : fitFor(x, nominal.rate);
       return fit ? (fit.rate + nominal.rateSe * x.stat) * x.volume_m3 : null;
     },
     { statDof: nominal.dof, noiseSd_ppm: [] },
@@ -140,14 +145,13 @@ export function fitBuildUpRateAndLevel<C>(input: BuildUpInput<C>): SupplyEstimat
       ),
     );
   }
-  const figures = linearisedFigures(
-    u,
-    (x) => {
-      const fit = fitFor(x, nominal.rate);
-      return fit ? (fit.rate + nominal.rateSe * x.stat) * x.volume_m3 : null;
-    },
-    { statDof: nominal.dof, noiseSd_ppm: [] },
-  );
+  // The fitted rate does not move with the meter's offset or gain (an affine change of every level
+  // only rescales the level terms of C = B + A·e^(−λt)), and neither outdoor level nor occupants
+  // enter this model: every draw shares the nominal rate, and only volume and the fit's own error vary.
+  const figures = linearisedFigures(u, (x) => (nominal.rate + nominal.rateSe * x.stat) * x.volume_m3, {
+    statDof: nominal.dof,
+    noiseSd_ppm: [],
+  });
   const steady = nominal.coefficients[0]!;
   const occ = u.occupants;
   const implied =

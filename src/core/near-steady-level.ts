@@ -10,7 +10,7 @@
  * have been above the reading, so the reading gives only a lower bound: a range open above.
  */
 import { supplyBetweenLevels } from './build-up-two-point.ts';
-import { monteCarloFigures, nominalInputs, trueLevel, type TrueInputs } from './supply-uncertainty.ts';
+import { linearisedFigures, monteCarloFigures, nominalInputs, trueLevel, type TrueInputs } from './supply-uncertainty.ts';
 import { NO_FIGURES, type Figure, type Reading, type SupplyEstimate, type UncertaintyInputs } from './supply-estimate.ts';
 import { PPM_PER_VOLUME_FRACTION } from './units.ts';
 import { warn, type EngineWarning } from './warnings.ts';
@@ -71,8 +71,15 @@ export function estimateNearSteady<C>(input: NearSteadyInput<C>): SupplyEstimate
   }
   const options = { draws, seed: input.seed, statDof: 0, noiseSd_ppm: [u.meter.noiseSd_ppm] };
   const high = monteCarloFigures(u, (x) => steadySupply(x, trueLevel(x, raw, 0)), options);
-  const low = monteCarloFigures(u, (x) => lowestSupply(x, trueLevel(x, raw, 0), duration), options);
+  // The lowest consistent supply needs a root search per evaluation, so its interval is propagated
+  // linearly (GUM §5.1, central differences on a log scale) rather than by a thousand root searches.
   const lowest = lowestSupply(nominal, level, duration);
+  // When even a sealed room could not have risen that far, no supply is ruled out: the lower limit is 0.
+  const zero = { value: 0, low: 0, high: 0 };
+  const low =
+    lowest === 0
+      ? { supply_m3s: zero, airChangeRate_perSecond: zero, supplyPerPerson_m3s: zero, steadyLevel_ppm: { value: null, low: null, high: null }, failedShare: 0 }
+      : linearisedFigures(u, (x) => lowestSupply(x, trueLevel(x, raw, 0), duration), options);
   const timeConstants = lowest ? (lowest / nominal.volume_m3) * duration : 0;
   const steady = timeConstants >= 3;
   const details = { steadyStateSupply_m3s: upper, lowestSupply_m3s: lowest, timeConstantsAtLowest: timeConstants };
