@@ -1,5 +1,6 @@
 /**
- * `npm run bench [-- node|chromium]`: runs the benchmarks and prints their figures and ratios.
+ * `npm run bench [-- node|chromium] [name…]`: runs the benchmarks (all, or those whose file name
+ * contains a given word) and prints their figures and ratios.
  *
  * Benchmarks measure; they never pass or fail on time (a busy machine would make that flaky).
  * Each file in test/bench/node/ or test/bench/chromium/ exports `default` an async function
@@ -12,8 +13,11 @@ import { join } from 'node:path';
 import type { BenchContext } from './bench-context.ts';
 
 const here = fileURLToPath(new URL('.', import.meta.url));
-const modes = process.argv.slice(2).filter((a) => a === 'node' || a === 'chromium');
+const args = process.argv.slice(2);
+const modes = args.filter((a) => a === 'node' || a === 'chromium');
 const wanted = modes.length > 0 ? modes : ['node', 'chromium'];
+/** Other words pick benchmarks by file name: `npm run bench -- node analysis`. */
+const names = args.filter((a) => a !== 'node' && a !== 'chromium');
 
 function report(name: string, figures: Record<string, string | number>): void {
   const parts = Object.entries(figures).map(([k, v]) => `${k}=${typeof v === 'number' ? formatNumber(v) : v}`);
@@ -29,7 +33,9 @@ function formatNumber(v: number): string {
 
 for (const mode of wanted) {
   const dir = join(here, mode);
-  const files = readdirSync(dir).filter((f) => f.endsWith('.bench.ts')).sort();
+  const files = readdirSync(dir)
+    .filter((f) => f.endsWith('.bench.ts') && (names.length === 0 || names.some((n) => f.includes(n))))
+    .sort();
   console.log(`\n[bench: ${mode}]`);
   if (files.length === 0) {
     console.log('  no benchmarks yet');

@@ -3,14 +3,12 @@
  * each a day profile plus a decay fit with a 1000-draw Monte Carlo interval, split over the
  * machine's cores with worker threads (the engine itself stays single-threaded and pure).
  */
-import { availableParallelism } from 'node:os';
-import { Worker } from 'node:worker_threads';
-import { pathToFileURL } from 'node:url';
 import type { BenchContext } from '../bench-context.ts';
 import { buildDayProfile, sampleProfile } from '../../../src/core/day-profile.ts';
 import { odexLevels } from '../../support/odex-day-profile.ts';
 import { busyDay } from '../../support/invented-days.ts';
 import { runRooms } from './engine-rooms.ts';
+import { runInWorkers } from './worker-pool.ts';
 
 export default async function engineBench(ctx: BenchContext): Promise<void> {
   // (a) exact profile vs odex, sampled every minute over the same day.
@@ -38,40 +36,17 @@ export default async function engineBench(ctx: BenchContext): Promise<void> {
 
   // (b) 5000 rooms: day profile + decay fit with a 1000-draw interval.
   const rooms = 5000;
-  const workers = Math.max(1, Math.min(availableParallelism(), 8));
   t0 = performance.now();
   const single = runRooms(0, 500);
   const singleMs = performance.now() - t0;
-  const startup0 = performance.now();
-  // Workers load TypeScript through tsx's loader, registered inside each worker; loading is
-  // timed separately from the work (a browser or the command line loads the engine once).
-  const entry = pathToFileURL(new URL('./engine-rooms-worker.ts', import.meta.url).pathname).href;
-  const bootstrap = `import('tsx/esm/api').then(({ register }) => { register(); return import(${JSON.stringify(entry)}); })`;
-  const pool = await Promise.all(
-    Array.from({ length: workers }, (_, w) => {
-      const from = Math.floor((w * rooms) / workers);
-      const to = Math.floor(((w + 1) * rooms) / workers);
-      const worker = new Worker(bootstrap, { eval: true, workerData: { from, to } });
-      return new Promise<Worker>((resolve, reject) => {
-        worker.once('message', () => resolve(worker));
-        worker.once('error', reject);
-      });
-    }),
-  );
-  const startupMs = performance.now() - startup0;
-  t0 = performance.now();
-  const shares = await Promise.all(
-    pool.map(
-      (worker) =>
-        new Promise<number>((resolve, reject) => {
-          worker.once('message', (done: number) => resolve(done));
-          worker.once('error', reject);
-          worker.postMessage('go');
-        }),
-    ),
-  );
-  const totalMs = performance.now() - t0;
-  await Promise.all(pool.map((w) => w.terminate()));
+  const run = await runInWorkers(new URL('./engine-rooms-worker.ts', import.meta.url), (w, n) => ({
+    from: Math.floor((w * rooms) / n),
+    to: Math.floor(((w + 1) * rooms) / n),
+  }));
+  const totalMs = run.work_s * 1000;
+  const startupMs = run.startup_s * 1000;
+  const shares = run.results;
+  const workers = run.workers;
   ctx.report('rooms (profile + decay, 1000 draws)', {
     rooms: shares.reduce((a, b) => a + b, 0),
     workers,
