@@ -1,0 +1,34 @@
+/** Plain words for the model's choices, as the room screens show them. */
+import type { Opening } from '../../model/opening.ts';
+
+type Options<T extends string> = { id: T; label: string }[];
+const options = <T extends string>(labels: Record<T, string>): Options<T> =>
+  (Object.entries(labels) as [T, string][]).map(([id, label]) => ({ id, label }));
+
+export const CHECK = options({ yes: 'Yes', no: 'No', 'not-checked': 'Not checked' });
+export const OPERABILITY = options({ opens: 'Opens', restricted: 'Opens only a little', blocked: 'Blocked or shut', seized: 'Will not open' });
+export const WINDOW_STYLE = options({ hinged: 'Hinged', sash: 'Sash (slides up)', sliding: 'Slides sideways', louvre: 'Louvre', fixed: 'Fixed' });
+export const WINDOW_HINGE = options({ side: 'Side-hung', top: 'Top-hung', bottom: 'Bottom-hung', 'centre-pivot': 'Centre pivot', 'tilt-and-turn': 'Tilt and turn' });
+export const VENT_KIND = options({ 'background-vent': 'Trickle vent', 'air-brick': 'Air brick', grille: 'Grille' });
+export const VENT_PURPOSE = options({ room: 'Air for the room', 'sub-floor': 'Under-floor void', 'combustion-air': 'Combustion air' });
+export const LABEL_AREA_IS = options({ equivalent: 'Equivalent area', free: 'Free area', unknown: 'Not stated' });
+export const FAN_DIRECTION = options({ extract: 'Extract', supply: 'Supply' });
+export const ISOLATOR = options({ on: 'On', off: 'Off', none: 'None fitted', 'not-found': 'Not found' });
+export const DUCTING = options({ ducted: 'Ducted outside', recirculating: 'Recirculating', 'through-wall': 'Through the wall' });
+export const SEX = options({ mixed: 'Mixed', female: 'Female', male: 'Male' });
+export const FACING = options({ N: 'N', NE: 'NE', E: 'E', SE: 'SE', S: 'S', SW: 'SW', W: 'W', NW: 'NW' });
+
+export const OPENING_NAMES: Record<Opening['type'], string> = { window: 'Window', vent: 'Vent', fan: 'Fan', undercut: 'Door undercut' };
+
+/** A short name for an opening in lists ("2 × Window, hinged"). */
+export function openingName(o: Opening): string {
+  const what =
+    o.type === 'window'
+      ? `Window, ${WINDOW_STYLE.find((s) => s.id === o.style)?.label.toLowerCase()}`
+      : o.type === 'vent'
+        ? VENT_KIND.find((k) => k.id === o.kind)!.label
+        : o.type === 'fan'
+          ? `${o.direction === 'extract' ? 'Extract' : 'Supply'} fan`
+          : 'Door undercut';
+  return o.count > 1 ? `${o.count} × ${what}` : what;
+}
