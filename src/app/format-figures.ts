@@ -51,3 +51,9 @@ export function duration(seconds: number | null): string {
   if (minutes < 60) return `${minutes} min`;
   return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
 }
+
+/** An air change rate stored per second, as air changes per hour: "0.9 h⁻¹ (0.6–1.3 h⁻¹)". */
+export function airChanges(perSecond: Ranged, units: UnitSystem = 'si'): string {
+  const h = (v: number | null) => (v === null ? null : v * 3600);
+  return range({ value: h(perSecond.value), low: h(perSecond.low), high: h(perSecond.high) }, 'airChanges', units);
+}

@@ -19,3 +19,13 @@ export function localIso(date: Date): string {
 export function clockOf(iso: string): string {
   return /T(\d{2}:\d{2})/.exec(iso)?.[1] ?? iso;
 }
+
+/**
+ * Seconds from midnight on the clock a moment was recorded in (its own hours and minutes,
+ * whatever its offset), as charts and schedules use them.
+ * Example: clockSeconds('2026-01-14T09:05:00+01:00') = 32 700.
+ */
+export function clockSeconds(iso: string): number {
+  const m = /T(\d{2}):(\d{2})(?::(\d{2}(?:\.\d+)?))?/.exec(iso);
+  return m ? Number(m[1]) * 3600 + Number(m[2]) * 60 + Number(m[3] ?? 0) : 0;
+}
