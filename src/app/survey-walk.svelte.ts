@@ -18,6 +18,7 @@ import { duplicateRoom } from '../store/duplicate-room.ts';
 import { loadSurvey } from '../store/load-survey.ts';
 import { listPhotos } from '../store/photos.ts';
 import { reorderRooms } from '../store/reorder-rooms.ts';
+import { getSurvey } from '../store/surveys.ts';
 import { saveArea, saveInstrument, saveReading, saveRoom } from '../store/survey-parts.ts';
 import { addPhoto, type PhotoPlace } from './add-photo.ts';
 import { Autosave } from './autosave.svelte.ts';
@@ -75,6 +76,13 @@ class SurveyWalk {
 
   async flushAll(): Promise<void> {
     await Promise.all([this.header.flush(), ...[...this.roomSaves.values()].map((save) => save.flush())]);
+  }
+
+  /** Read the stored header again (another screen changed it), unless edits here are waiting. */
+  async reloadHeader(): Promise<void> {
+    if (!this.doc || this.header.state !== 'saved') return;
+    const stored = await getSurvey(connection, this.doc.survey.id);
+    if (stored && this.doc?.survey.id === stored.id) this.doc.survey = stored;
   }
 
   room(roomId: string | null): DocumentRoom | undefined {

@@ -32,3 +32,26 @@ export function openingName(o: Opening): string {
           : 'Door undercut';
   return o.count > 1 ? `${o.count} × ${what}` : what;
 }
+
+export const QUANTITY_WORDS: Record<import('../../model/instrument.ts').MeasuredQuantity, string> = {
+  co2: 'CO₂',
+  temperature: 'Temperature',
+  'relative-humidity': 'Relative humidity',
+  'surface-temperature': 'Surface temperature',
+  airflow: 'Airflow (fan flow)',
+  'air-speed': 'Air speed',
+  pressure: 'Pressure',
+  'moisture-content': 'Moisture content',
+};
+
+/** Units of each quantity as stored (offsets of side-by-side checks are in these). */
+export const QUANTITY_UNITS: Record<import('../../model/instrument.ts').MeasuredQuantity, string> = {
+  co2: 'ppm',
+  temperature: '°C',
+  'relative-humidity': '%',
+  'surface-temperature': '°C',
+  airflow: 'm³/s',
+  'air-speed': 'm/s',
+  pressure: 'Pa',
+  'moisture-content': '%',
+};
