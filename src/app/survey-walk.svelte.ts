@@ -16,7 +16,7 @@ import type { DocumentRoom, SurveyDocument } from '../model/survey-document.ts';
 import { validationProblems, type ValidationProblem } from '../model/validation-problem.ts';
 import { duplicateRoom } from '../store/duplicate-room.ts';
 import { loadSurvey } from '../store/load-survey.ts';
-import { listPhotos } from '../store/photos.ts';
+import { getPhotoBytes, listPhotos } from '../store/photos.ts';
 import { reorderRooms } from '../store/reorder-rooms.ts';
 import { getSurvey } from '../store/surveys.ts';
 import { saveArea, saveInstrument, saveReading, saveRoom } from '../store/survey-parts.ts';
@@ -189,6 +189,12 @@ class SurveyWalk {
   async addPhoto(file: Blob, place: Omit<PhotoPlace, 'surveyId'>): Promise<void> {
     const photo = await addPhoto(file, { ...place, surveyId: this.doc!.survey.id });
     this.photos.push(photo);
+  }
+
+  /** A photo's picture as an object URL (the caller revokes it), or undefined. */
+  async photoUrl(photoId: string): Promise<string | undefined> {
+    const bytes = await getPhotoBytes(connection, photoId);
+    return bytes && URL.createObjectURL(new Blob([bytes], { type: 'image/jpeg' }));
   }
 
   private upsert<T extends { id: string }>(list: T[], record: T): void {

@@ -55,3 +55,35 @@ export const QUANTITY_UNITS: Record<import('../../model/instrument.ts').Measured
   pressure: 'Pa',
   'moisture-content': '%',
 };
+
+export const APPLIANCE_KIND = options({
+  'gas-boiler': 'Gas boiler',
+  'gas-water-heater': 'Gas water heater',
+  'gas-fire': 'Gas fire',
+  'gas-cooker': 'Gas cooker or hob',
+  'oil-boiler': 'Oil boiler',
+  'solid-fuel-stove': 'Solid-fuel stove',
+  'open-fire': 'Open fire',
+  'unflued-heater': 'Unflued heater',
+  other: 'Other',
+});
+export const FLUE = options({ 'room-sealed': 'Room-sealed', 'open-flued': 'Open-flued', flueless: 'Flueless', 'not-known': 'Not known' });
+export const GAS_RECORD = options({ yes: 'Seen', no: 'Not available', 'not-checked': 'Not checked', 'not-applicable': 'Not applicable' });
+export const DEFECT_KIND = options({
+  mould: 'Mould',
+  condensation: 'Condensation',
+  leak: 'Leak or penetrating damp',
+  'fan-dead': 'Fan not working',
+  'vent-shut': 'Vent shut',
+  'vent-blocked': 'Vent blocked',
+  other: 'Other',
+});
+export const MOULD_PATTERN = options({
+  spots: 'Spots',
+  patches: 'Patches',
+  'external-corners': 'External corners',
+  'behind-furniture': 'Behind furniture',
+  'ceiling-edge': 'Ceiling edge',
+  'around-window': 'Around the window',
+  widespread: 'Widespread',
+});
