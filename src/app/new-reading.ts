@@ -14,7 +14,7 @@ export function startingConditions(room: DocumentRoom): Conditions {
   if (last) {
     const people = room.occupants.map((g) => ({ groupId: g.id, count: last.people.find((p) => p.groupId === g.id)?.count ?? 0 }));
     const { openOpeningIds: _open, ...rest } = last;
-    return { ...structuredClone(rest), people };
+    return { ...rest, people }; // every other field is a plain value
   }
   return {
     people: room.occupants.map((g) => ({ groupId: g.id, count: g.count })),
