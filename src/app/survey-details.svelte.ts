@@ -10,7 +10,7 @@ import { surveyEssentialsSchema } from '../model/survey.ts';
 import { validationProblems, type ValidationProblem } from '../model/validation-problem.ts';
 import { editableRevision } from '../model/revision-lock.ts';
 import { getSurvey } from '../store/surveys.ts';
-import { updateSurveyHeader } from './update-survey-header.ts';
+import { knowHeader, updateSurveyHeader } from './update-survey-header.ts';
 import { connection } from './storage-connection.ts';
 import { Autosave } from './autosave.svelte.ts';
 
@@ -43,6 +43,7 @@ class SurveyDetails {
         return;
       }
       this.survey = survey;
+      knowHeader(survey);
       const { title, site, client, buildingUse, ventilation, stage } = survey;
       this.form = { title, site, client, buildingUse, ventilation, stage };
     } catch (error) {

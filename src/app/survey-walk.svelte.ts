@@ -24,7 +24,7 @@ import { addPhoto, type PhotoPlace } from './add-photo.ts';
 import { Autosave } from './autosave.svelte.ts';
 import { LiveAnalysis } from './live-analysis.svelte.ts';
 import { connection } from './storage-connection.ts';
-import { updateSurveyHeader, type SurveyPatch } from './update-survey-header.ts';
+import { knowHeader, updateSurveyHeader, type SurveyPatch } from './update-survey-header.ts';
 
 const message = (error: unknown) => (error instanceof Error ? error.message : String(error));
 
@@ -60,6 +60,7 @@ class SurveyWalk {
         return;
       }
       this.doc = doc;
+      knowHeader(doc.survey);
       this.photos = photos;
       this.analysis.request(doc, 0);
     } catch (error) {
@@ -82,7 +83,10 @@ class SurveyWalk {
   async reloadHeader(): Promise<void> {
     if (!this.doc || this.header.state !== 'saved') return;
     const stored = await getSurvey(connection, this.doc.survey.id);
-    if (stored && this.doc?.survey.id === stored.id) this.doc.survey = stored;
+    if (stored && this.doc?.survey.id === stored.id) {
+      knowHeader(stored);
+      this.doc.survey = stored;
+    }
   }
 
   room(roomId: string | null): DocumentRoom | undefined {
