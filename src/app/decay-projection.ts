@@ -39,6 +39,6 @@ export async function projectTenMoreMinutes(
     ...document,
     rooms: [{ ...room, readings: [...room.readings, ...extra], tests: room.tests.map((t) => (t.id === testId ? { ...t, readingIds: [...t.readingIds, ...extra.map((r) => r.id)] } : t)) }],
   };
-  const results = await analyseInWorker(projected);
+  const results = await analyseInWorker({ document: projected });
   return results.rooms[0]?.measured.find((m) => m.setId === testId)?.supply_m3s ?? null;
 }

@@ -1,10 +1,12 @@
 /**
  * The findings of the open survey, kept current: every saved change asks for a new analysis,
- * which runs in the worker once changes pause (debounced), so typing never waits for it. Only
- * the latest request's results are kept. The result types are re-exported for the screens.
+ * which runs in the worker on the survey as stored once saves pause (debounced), so typing never
+ * waits for it and the page copies nothing. Each room's results are kept on their own as they
+ * arrive (in batches), so a long survey's screen updates a few rooms at a time; only the latest
+ * request counts. The result types are re-exported for the screens.
  */
-import type { AnalysisResults } from '../analysis/results.ts';
-import type { SurveyDocument } from '../model/survey-document.ts';
+import { SvelteMap } from 'svelte/reactivity';
+import type { AnalysisResults, RoomResults } from '../analysis/results.ts';
 import { analyseInWorker } from './analysis-client.ts';
 
 export type {
@@ -18,44 +20,49 @@ export type {
   AnalysisWarning,
 } from '../analysis/results.ts';
 
-/** Quiet time after the last change before the analysis runs, ms. */
-export const ANALYSIS_DELAY_MS = 500;
+/** Quiet time after the last save before the analysis runs, ms. */
+export const ANALYSIS_DELAY_MS = 300;
 
 export class LiveAnalysis {
+  /** The latest whole results (survey-level figures: weather cases, outdoor level, areas). */
   results = $state.raw<AnalysisResults | null>(null);
+  /** Each room's latest results, by room id. */
+  readonly rooms = new SvelteMap<string, RoomResults>();
   running = $state(false);
   error = $state<string | null>(null);
   private timer: ReturnType<typeof setTimeout> | undefined;
   private latest = 0;
 
-  /** A new version of the document: analyse it once changes pause. */
-  request(document: SurveyDocument, delayMs = ANALYSIS_DELAY_MS): void {
-    const snapshot = $state.snapshot(document) as SurveyDocument;
+  /** The stored survey changed: analyse it once saves pause. */
+  request(surveyId: string, delayMs = ANALYSIS_DELAY_MS): void {
     clearTimeout(this.timer);
     this.running = true;
-    this.timer = setTimeout(() => void this.run(snapshot), delayMs);
+    this.timer = setTimeout(() => void this.run(surveyId), delayMs);
   }
 
   clear(): void {
     clearTimeout(this.timer);
     this.latest += 1;
     this.results = null;
+    this.rooms.clear();
     this.running = false;
     this.error = null;
   }
 
-  private async run(document: SurveyDocument): Promise<void> {
+  private async run(surveyId: string): Promise<void> {
     const ticket = ++this.latest;
+    const current = () => ticket === this.latest;
     try {
-      const results = await analyseInWorker(document);
-      if (ticket !== this.latest) return;
+      const results = await analyseInWorker({ surveyId }, (rooms) => {
+        if (current()) for (const room of rooms) this.rooms.set(room.roomId, room);
+      });
+      if (!current()) return;
       this.results = results;
       this.error = null;
     } catch (error) {
-      if (ticket !== this.latest) return;
-      this.error = error instanceof Error ? error.message : String(error);
+      if (current()) this.error = error instanceof Error ? error.message : String(error);
     } finally {
-      if (ticket === this.latest) this.running = false;
+      if (current()) this.running = false;
     }
   }
 }

@@ -3,8 +3,8 @@
  * readings), the photos' descriptions, and the live findings. Screens edit the document in
  * place and say what changed; each change is checked with the model's schema and autosaved —
  * the header through a patch applied to the stored header, each room through its own autosave,
- * readings, instruments, areas and photos as single records — and then the analysis is asked
- * to run again.
+ * readings, instruments, areas and photos as single records — and once a save has landed the
+ * analysis is asked to run again (on the survey as stored).
  */
 import type { Area } from '../model/area.ts';
 import type { Instrument } from '../model/instrument.ts';
@@ -41,7 +41,9 @@ class SurveyWalk {
   readonly header = new Autosave<SurveyPatch>({
     form: 'survey header',
     save: async (patch) => {
-      if (this.doc) await updateSurveyHeader(this.doc.survey.id, patch);
+      if (!this.doc) return;
+      await updateSurveyHeader(this.doc.survey.id, patch);
+      this.analyse();
     },
   });
 
@@ -59,10 +61,10 @@ class SurveyWalk {
         this.loadError = 'This survey is not on this device (it may have been deleted).';
         return;
       }
+      this.analysis.request(surveyId, 0);
       this.doc = doc;
       knowHeader(doc.survey);
       this.photos = photos;
-      this.analysis.request(doc, 0);
     } catch (error) {
       this.loadError = message(error);
     }
@@ -106,14 +108,19 @@ class SurveyWalk {
     }
     this.headerProblems = [];
     this.header.edit(this.patch);
-    this.analysis.request(this.doc);
   }
 
   /** The autosave of one room (its own, so edits to two rooms never replace each other). */
   roomSave(roomId: string): Autosave<Room> {
     let save = this.roomSaves.get(roomId);
     if (!save) {
-      save = new Autosave<Room>({ form: `room ${roomId}`, save: async (room) => void (await saveRoom(connection, this.doc!.survey.id, room)) });
+      save = new Autosave<Room>({
+        form: `room ${roomId}`,
+        save: async (room) => {
+          await saveRoom(connection, this.doc!.survey.id, room);
+          this.analyse();
+        },
+      });
       this.roomSaves.set(roomId, save);
     }
     return save;
@@ -134,7 +141,6 @@ class SurveyWalk {
     }
     this.roomProblems[roomId] = [];
     this.roomSave(roomId).edit(parsed.data);
-    this.analysis.request(this.doc);
   }
 
   /** Save a new room (already complete and valid) last in the survey. */
@@ -142,7 +148,7 @@ class SurveyWalk {
     const saved = await saveRoom(connection, this.doc!.survey.id, room);
     const added = { ...saved, readings: [] };
     this.doc!.rooms.push(added);
-    this.analysis.request(this.doc!);
+    this.analyse();
     return added;
   }
 
@@ -152,7 +158,7 @@ class SurveyWalk {
     const copy = await duplicateRoom(connection, roomId, () => crypto.randomUUID(), now.toISOString());
     const added = { ...copy, readings: [] };
     this.doc!.rooms.push(added);
-    this.analysis.request(this.doc!);
+    this.analyse();
     return added;
   }
 
@@ -172,13 +178,13 @@ class SurveyWalk {
   async saveArea(area: Area, now = new Date()): Promise<void> {
     const saved = await saveArea(connection, this.doc!.survey.id, $state.snapshot(area) as Area, now.toISOString());
     this.upsert(this.doc!.areas, saved);
-    this.analysis.request(this.doc!);
+    this.analyse();
   }
 
   async saveInstrument(instrument: Instrument, now = new Date()): Promise<void> {
     const saved = await saveInstrument(connection, this.doc!.survey.id, $state.snapshot(instrument) as Instrument, now.toISOString());
     this.upsert(this.doc!.instruments, saved);
-    this.analysis.request(this.doc!);
+    this.analyse();
   }
 
   /** Save a reading of a room (the room's pending edits are saved first). */
@@ -186,7 +192,7 @@ class SurveyWalk {
     await this.roomSave(roomId).flush();
     const saved = await saveReading(connection, this.doc!.survey.id, roomId, $state.snapshot(reading) as Reading, now.toISOString());
     this.upsert(this.room(roomId)!.readings, saved);
-    this.analysis.request(this.doc!);
+    this.analyse();
     return saved;
   }
 
@@ -199,6 +205,11 @@ class SurveyWalk {
   async photoUrl(photoId: string): Promise<string | undefined> {
     const bytes = await getPhotoBytes(connection, photoId);
     return bytes && URL.createObjectURL(new Blob([bytes], { type: 'image/jpeg' }));
+  }
+
+  /** Stored data changed: the findings follow. */
+  private analyse(): void {
+    if (this.doc) this.analysis.request(this.doc.survey.id);
   }
 
   private upsert<T extends { id: string }>(list: T[], record: T): void {
