@@ -7,6 +7,7 @@
 import type { AnalysisOptions } from '../analysis/analyse-survey.ts';
 import type { AnalysisResults, RoomResults } from '../analysis/results.ts';
 import type { SurveyDocument } from '../model/survey-document.ts';
+import type { AnalysisRequest } from './analysis-worker.ts';
 
 type Reply = { id: number; rooms?: RoomResults[]; results?: AnalysisResults; error?: string };
 interface Call {
@@ -52,6 +53,6 @@ export function analyseInWorker(
   const id = nextId++;
   return new Promise((resolve, reject) => {
     waiting.set(id, { rooms: [], onRooms, resolve, reject });
-    theWorker().postMessage({ id, ...what, options });
+    theWorker().postMessage({ id, ...what, options } satisfies AnalysisRequest);
   });
 }

@@ -6,7 +6,7 @@
  * Source: common practice (no published source) for the heights and occupant groups; the day
  * templates are the engine's own invented timetables (src/core/day-templates.ts).
  *
- * Example: suggestedHeight('classroom') = 2.7; templateFor('bedroom') = 'bedroom'.
+ * Example: suggestedHeight('classroom') = 2.7; a new bedroom starts from the 'bedroom' template.
  */
 import type { RoomUse } from '../core/room-uses.ts';
 import type { BuildingUse } from '../core/building-uses.ts';
@@ -29,7 +29,7 @@ export const SCHEDULE_TEMPLATES = [
 ] as const;
 
 /** The day template a use starts from, or '' when none fits. */
-export function templateFor(use: RoomUse): string {
+function templateFor(use: RoomUse): string {
   return SCHEDULE_TEMPLATES.find((t) => t.id === use)?.id ?? '';
 }
 

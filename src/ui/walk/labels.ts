@@ -1,5 +1,6 @@
 /** Plain words for the model's choices, as the room screens show them. */
 import type { Opening } from '../../model/opening.ts';
+import { APPLIANCE_LABELS } from '../../app/safety-items.ts';
 
 type Options<T extends string> = { id: T; label: string }[];
 const options = <T extends string>(labels: Record<T, string>): Options<T> =>
@@ -18,7 +19,6 @@ export const DUCTING = options({ ducted: 'Ducted outside', recirculating: 'Recir
 export const SEX = options({ mixed: 'Mixed', female: 'Female', male: 'Male' });
 export const FACING = options({ N: 'N', NE: 'NE', E: 'E', SE: 'SE', S: 'S', SW: 'SW', W: 'W', NW: 'NW' });
 
-export const OPENING_NAMES: Record<Opening['type'], string> = { window: 'Window', vent: 'Vent', fan: 'Fan', undercut: 'Door undercut' };
 
 /** A short name for an opening in lists ("2 × Window, hinged"). */
 export function openingName(o: Opening): string {
@@ -56,17 +56,7 @@ export const QUANTITY_UNITS: Record<import('../../model/instrument.ts').Measured
   'moisture-content': '%',
 };
 
-export const APPLIANCE_KIND = options({
-  'gas-boiler': 'Gas boiler',
-  'gas-water-heater': 'Gas water heater',
-  'gas-fire': 'Gas fire',
-  'gas-cooker': 'Gas cooker or hob',
-  'oil-boiler': 'Oil boiler',
-  'solid-fuel-stove': 'Solid-fuel stove',
-  'open-fire': 'Open fire',
-  'unflued-heater': 'Unflued heater',
-  other: 'Other',
-});
+export const APPLIANCE_KIND = options({ ...APPLIANCE_LABELS, other: 'Other' });
 export const FLUE = options({ 'room-sealed': 'Room-sealed', 'open-flued': 'Open-flued', flueless: 'Flueless', 'not-known': 'Not known' });
 export const GAS_RECORD = options({ yes: 'Seen', no: 'Not available', 'not-checked': 'Not checked', 'not-applicable': 'Not applicable' });
 export const DEFECT_KIND = options({
