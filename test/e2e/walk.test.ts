@@ -81,7 +81,7 @@ describe.skipIf(!baseURL)('the walk in Chromium (phone)', () => {
     await page.getByRole('button', { name: 'Add area' }).click();
     await page.getByRole('heading', { name: 'Ground floor' }).waitFor();
     for (const [name, length] of [['Classroom D1', '7,2'], ['Classroom D2', '6,8']] as const) {
-      await page.getByRole('link', { name: '← Termly walk-round, Block D (invented)' }).click().catch(() => undefined);
+      if (name === 'Classroom D2') await page.getByRole('link', { name: '← Termly walk-round, Block D (invented)' }).click();
       await page.getByLabel('Room name').fill(name);
       await page.getByLabel('In area').selectOption({ label: 'Ground floor' });
       await page.getByLabel('Length', { exact: true }).fill(length);
