@@ -1,7 +1,7 @@
 /**
- * The survey (and, once room screens exist, the room) that was open, remembered durably so a
- * cold start — iOS restarts installed apps at their start URL after killing them in the
- * background — reopens there. Leaving for the survey list forgets it.
+ * The survey and room that were open, remembered durably so a cold start — iOS restarts
+ * installed apps at their start URL after killing them in the background — reopens there.
+ * Leaving for the survey list forgets it.
  */
 import { readMeta, writeMeta, type LastOpen } from '../store/meta.ts';
 import { getSurvey } from '../store/surveys.ts';
@@ -13,10 +13,24 @@ export async function rememberOpen(open: LastOpen | undefined): Promise<void> {
   await writeMeta(connection, 'lastOpen', open).catch(() => undefined);
 }
 
-/** On a bare cold start, go back to the survey that was open, if it is still on the device. */
+/** Keep the remembered place current as the surveyor moves about. */
+export function trackOpen(): void {
+  let last = '';
+  const remember = ({ surveyId, roomId }: { surveyId: string | null; roomId: string | null }) => {
+    const key = `${surveyId}/${roomId}`;
+    if (key === last) return;
+    last = key;
+    void rememberOpen(surveyId ? { surveyId, ...(roomId ? { roomId } : {}) } : undefined);
+  };
+  remember(navigation);
+  navigation.onChange(remember);
+}
+
+/** On a bare cold start, go back to the survey (and room) that was open, if still on the device. */
 export async function reopenLast(): Promise<void> {
   if (!navigation.startedBare) return;
   const last = await readMeta(connection, 'lastOpen').catch(() => undefined);
   if (!last || !(await getSurvey(connection, last.surveyId).catch(() => undefined))) return;
-  if (navigation.screen === 'surveys') navigation.go('survey', last.surveyId);
+  if (navigation.screen !== 'surveys') return;
+  navigation.go(last.roomId ? { screen: 'room', surveyId: last.surveyId, roomId: last.roomId } : { screen: 'overview', surveyId: last.surveyId });
 }

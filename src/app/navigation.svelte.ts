@@ -1,32 +1,62 @@
 /**
  * Which screen is showing, kept in the URL hash so the back button and a cold start on an
- * installed app land where the surveyor was. Screens: the survey list, settings, and one
- * survey's details (#/survey/<id>).
+ * installed app land where the surveyor was. Screens: the survey list, settings, and inside one
+ * survey its overview (#/survey/<id>), settings (…/details), start of visit (…/visit), a room
+ * (…/room/<roomId>), its findings (…/room/<roomId>/findings) and a guided test
+ * (…/room/<roomId>/test/<kind>).
  */
-export type Screen = 'surveys' | 'settings' | 'survey';
+export type Screen = 'surveys' | 'settings' | 'overview' | 'details' | 'visit' | 'room' | 'findings' | 'test';
 
-interface Place {
+export interface Place {
   screen: Screen;
   surveyId: string | null;
+  roomId: string | null;
+  /** The guided test's kind on the test screen (decay, seeded-decay, build-up). */
+  test: string | null;
 }
 
-function placeFromHash(hash: string): Place {
-  const [name, id] = hash.replace(/^#\/?/, '').split('/');
-  if (name === 'survey' && id) return { screen: 'survey', surveyId: decodeURIComponent(id) };
-  if (name === 'settings') return { screen: 'settings', surveyId: null };
-  return { screen: 'surveys', surveyId: null };
+const NONE = { surveyId: null, roomId: null, test: null };
+const SURVEY_SCREENS = new Set(['details', 'visit']);
+
+export function placeFromHash(hash: string): Place {
+  const [name, id, part, roomId, roomPart, test] = hash.replace(/^#\/?/, '').split('/').map(decodeURIComponent);
+  if (name === 'settings') return { screen: 'settings', ...NONE };
+  if (name !== 'survey' || !id) return { screen: 'surveys', ...NONE };
+  const survey = { ...NONE, surveyId: id };
+  if (part && SURVEY_SCREENS.has(part)) return { screen: part as Screen, ...survey };
+  if (part === 'room' && roomId) {
+    const room = { ...survey, roomId };
+    if (roomPart === 'findings') return { screen: 'findings', ...room };
+    if (roomPart === 'test' && test) return { screen: 'test', ...room, test };
+    return { screen: 'room', ...room };
+  }
+  return { screen: 'overview', ...survey };
 }
 
-/** The hash for a place. Example: hashFor('survey', 'abc') = '#/survey/abc'. */
-export function hashFor(screen: Screen, surveyId?: string): string {
-  return screen === 'survey' && surveyId ? `#/survey/${encodeURIComponent(surveyId)}` : `#/${screen}`;
+/**
+ * The hash for a place. Examples: hashFor({ screen: 'overview', surveyId: 'abc' }) = '#/survey/abc';
+ * hashFor({ screen: 'room', surveyId: 'a', roomId: 'r' }) = '#/survey/a/room/r'.
+ */
+export function hashFor(place: Partial<Place> & { screen: Screen }): string {
+  const { screen, surveyId, roomId, test } = place;
+  if (!surveyId || screen === 'surveys' || screen === 'settings') return `#/${screen === 'settings' ? 'settings' : 'surveys'}`;
+  const survey = `#/survey/${encodeURIComponent(surveyId)}`;
+  if (screen === 'overview') return survey;
+  if (screen === 'details' || screen === 'visit') return `${survey}/${screen}`;
+  const room = `${survey}/room/${encodeURIComponent(roomId ?? '')}`;
+  if (screen === 'findings') return `${room}/findings`;
+  if (screen === 'test') return `${room}/test/${encodeURIComponent(test ?? 'decay')}`;
+  return room;
 }
 
 class Navigation {
   screen = $state<Screen>('surveys');
   surveyId = $state<string | null>(null);
+  roomId = $state<string | null>(null);
+  test = $state<string | null>(null);
   /** True when the app started without a place in its address (a cold start at the start URL). */
   startedBare = false;
+  private listeners: ((place: Place) => void)[] = [];
 
   start(): void {
     this.startedBare = window.location.hash.replace(/^#\/?/, '') === '';
@@ -34,14 +64,22 @@ class Navigation {
     window.addEventListener('hashchange', () => this.show(placeFromHash(window.location.hash)));
   }
 
-  go(screen: Screen, surveyId?: string): void {
-    window.location.hash = hashFor(screen, surveyId);
-    this.show({ screen, surveyId: surveyId ?? null });
+  go(place: Partial<Place> & { screen: Screen }): void {
+    window.location.hash = hashFor(place);
+    this.show(placeFromHash(hashFor(place)));
+  }
+
+  /** Call `listener` with every place shown from now on. */
+  onChange(listener: (place: Place) => void): void {
+    this.listeners.push(listener);
   }
 
   private show(place: Place): void {
     this.screen = place.screen;
     this.surveyId = place.surveyId;
+    this.roomId = place.roomId;
+    this.test = place.test;
+    for (const listener of this.listeners) listener(place);
   }
 }
 

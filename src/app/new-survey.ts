@@ -12,10 +12,14 @@ import { deviceStatus } from './device-status.svelte.ts';
 
 export type NewSurveyResult = { ok: true; survey: Survey } | { ok: false; problems: ValidationProblem[] };
 
-export async function startSurvey(input: NewSurveyInput, now: Date = new Date()): Promise<NewSurveyResult> {
+/** Essentials chosen on the start form besides title, site and use (each may be left unset). */
+export type NewSurveyChoices = Pick<Survey, 'ventilation' | 'criteria'>;
+
+export async function startSurvey(input: NewSurveyInput, now: Date = new Date(), choices: NewSurveyChoices = {}): Promise<NewSurveyResult> {
   const parsed = newSurveyInputSchema.safeParse(input);
   if (!parsed.success) return { ok: false, problems: validationProblems(parsed.error) };
-  const survey = await saveSurvey(connection, newSurveyRecord(parsed.data, crypto.randomUUID(), now.toISOString()));
+  const chosen = Object.fromEntries(Object.entries(choices).filter(([, v]) => v !== undefined));
+  const survey = await saveSurvey(connection, { ...newSurveyRecord(parsed.data, crypto.randomUUID(), now.toISOString()), ...chosen });
   void deviceStatus.requestProtection();
   return { ok: true, survey };
 }

@@ -3,16 +3,16 @@
  * use, ventilation type, new / refurbished / existing) loaded from storage, edited in place and
  * autosaved. An edit that breaks a rule (an empty title) is kept on screen and in memory with
  * the reason, and is not saved until it is put right. An edit to an issued revision is saved as
- * the next revision. Opening a survey remembers it, so a cold start comes back here.
+ * the next revision.
  */
 import type { Survey, SurveyEssentials } from '../model/survey.ts';
 import { surveyEssentialsSchema } from '../model/survey.ts';
 import { validationProblems, type ValidationProblem } from '../model/validation-problem.ts';
 import { editableRevision } from '../model/revision-lock.ts';
-import { getSurvey, saveSurvey } from '../store/surveys.ts';
+import { getSurvey } from '../store/surveys.ts';
+import { knowHeader, updateSurveyHeader } from './update-survey-header.ts';
 import { connection } from './storage-connection.ts';
 import { Autosave } from './autosave.svelte.ts';
-import { rememberOpen } from './last-open.ts';
 
 class SurveyDetails {
   /** The survey as last loaded or saved. */
@@ -24,7 +24,8 @@ class SurveyDetails {
   readonly autosave = new Autosave<Survey>({
     form: 'survey details',
     save: async (survey) => {
-      this.survey = await saveSurvey(connection, survey);
+      const { title, site, client, buildingUse, ventilation, stage } = survey;
+      this.survey = await updateSurveyHeader(survey.id, { title, site, client, buildingUse, ventilation, stage }, new Date(survey.updatedAt));
     },
   });
 
@@ -42,9 +43,9 @@ class SurveyDetails {
         return;
       }
       this.survey = survey;
+      knowHeader(survey);
       const { title, site, client, buildingUse, ventilation, stage } = survey;
       this.form = { title, site, client, buildingUse, ventilation, stage };
-      void rememberOpen({ surveyId });
     } catch (error) {
       this.loadError = error instanceof Error ? error.message : String(error);
     }
@@ -79,7 +80,8 @@ class SurveyDetails {
   async close(): Promise<void> {
     await this.autosave.flush();
     this.autosave.closeForm();
-    void rememberOpen(undefined);
+    // Other screens edit the same header (visit, settings): read it afresh next time.
+    if (this.autosave.state === 'saved') this.form = null;
   }
 
   problemFor(field: keyof SurveyEssentials): string | undefined {

@@ -3,10 +3,10 @@
  * fonts, the logger parser's worker) are covered without editing anything.
  *
  * Everything emitted that the app may need offline: JS (including lazy chunks and workers), CSS,
- * HTML, fonts, icons and the manifest. Left out: jspdf's optional html2canvas, canvg and
+ * HTML, fonts, icons, the manifest and the demo survey file (JSON). Left out: jspdf's optional html2canvas, canvg and
  * dompurify chunks, which the report never uses (it draws directly, never from HTML).
  */
-export const precacheGlobs: string[] = ['**/*.{js,mjs,css,html,woff,woff2,ttf,otf,svg,png,ico,webmanifest}'];
+export const precacheGlobs: string[] = ['**/*.{js,mjs,css,html,woff,woff2,ttf,otf,svg,png,ico,webmanifest,json}'];
 
 /** File-name fragments of jspdf's optional dependencies, which Rollup names after their modules. */
 export const optionalJspdfChunks: string[] = ['html2canvas', 'canvg', 'purify'];

@@ -49,3 +49,9 @@ export async function deleteSurveyPhotos(connection: Connection, surveyId: strin
     return keys.length;
   });
 }
+
+/** The photos of a survey, described (without their bytes), in the order they were added. */
+export async function listPhotos(connection: Connection, surveyId: string): Promise<Photo[]> {
+  const records = await connection.run((db) => db.getAllFromIndex('photos', 'bySurvey', ofSurvey(surveyId)));
+  return records.map(({ surveyId: _s, position: _p, bytes: _b, type: _t, ...photo }) => photo);
+}

@@ -55,6 +55,8 @@ describe.skipIf(!baseURL)('app shell in Chromium (phone)', () => {
       await page.getByLabel(/^Site/).fill('Hollowmere Academy (invented)');
       await page.getByText('Homes (houses and flats)').click();
       await page.getByRole('button', { name: 'Start survey' }).click();
+      await page.getByRole('heading', { name: 'Termly walk-round, Block C (invented)' }).waitFor(); // the new survey opens
+      await page.getByRole('link', { name: '← All surveys' }).click();
       const item = page.getByRole('listitem').filter({ hasText: 'Termly walk-round, Block C (invented)' });
       await item.waitFor();
       await page.reload();

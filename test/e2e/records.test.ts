@@ -57,6 +57,7 @@ describe.skipIf(!baseURL)('survey records in Chromium (phone)', () => {
     await context.setOffline(true);
     try {
       await page.getByRole('link', { name: /Damp and mould inspection/ }).click();
+      await page.getByRole('link', { name: 'Survey settings' }).click();
       await page.getByRole('heading', { name: 'Survey details' }).waitFor();
       const site = page.getByLabel('Site');
       await site.fill('Calder Rise, Larkhill Road, block A (invented)');
@@ -91,12 +92,14 @@ describe.skipIf(!baseURL)('survey records in Chromium (phone)', () => {
 
   it('reopens on the last survey after a cold start at the start address', async () => {
     await page.goto(baseURL);
+    await page.getByRole('link', { name: 'Survey settings' }).click(); // reopened on the survey's overview
     await page.getByRole('heading', { name: 'Survey details' }).waitFor();
     await expect(page.getByLabel('Survey title').inputValue()).resolves.toMatch(/revisited$/);
     await expect(page.getByLabel('Mechanical').isChecked()).resolves.toBe(true);
   });
 
   it('downloads a backup that is a valid survey file, and remembers when', async () => {
+    await page.getByRole('link', { name: '← Back to the survey' }).click();
     await page.getByRole('link', { name: '← All surveys' }).click();
     await page.getByText('No backup made on this device yet.').waitFor(); // a one-survey file is not a backup of everything
     await page.getByRole('button', { name: 'Prepare a backup of all surveys' }).click();

@@ -1,0 +1,59 @@
+/**
+ * Numbers as a practitioner writes them: converted to the survey's display units and rounded to
+ * the reporting step by src/core/units.ts (CO₂ to 10 ppm, L/s to 0.5, ACH to 0.1), with the unit,
+ * and a range written "low–high". Missing values say so in words, never 0 or NaN.
+ *
+ * Examples: quantity(0.0523, 'flow') = '52.5 L/s'; range({ value: 0.01, low: 0.008, high: 0.013 },
+ * 'flow') = '10 L/s (8–13 L/s)'.
+ */
+import { displayQuantity, type QuantityKind, type UnitSystem } from '../core/units.ts';
+import type { Basis, Ranged } from '../analysis/results.ts';
+
+const NUMBER = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 6 });
+
+function number(si: number, kind: QuantityKind, units: UnitSystem): { text: string; unit: string } {
+  const shown = displayQuantity(si, kind, units);
+  return { text: NUMBER.format(shown.value), unit: shown.unit };
+}
+
+/** One value with its unit. */
+export function quantity(si: number | null | undefined, kind: QuantityKind, units: UnitSystem = 'si'): string {
+  if (si === null || si === undefined || !Number.isFinite(si)) return 'not known';
+  const { text, unit } = number(si, kind, units);
+  return unit === '%' ? `${text}%` : `${text} ${unit}`;
+}
+
+/** The range alone: "8–13 L/s". */
+export function bounds(low: number | null, high: number | null, kind: QuantityKind, units: UnitSystem = 'si'): string {
+  if (low === null || high === null) return 'range not known';
+  const lo = number(low, kind, units);
+  const hi = number(high, kind, units);
+  return `${lo.text}–${hi.text} ${hi.unit}`;
+}
+
+/** A value with its range: "10 L/s (8–13 L/s)". */
+export function range(figure: Ranged, kind: QuantityKind, units: UnitSystem = 'si'): string {
+  const main = quantity(figure.value, kind, units);
+  return figure.low === null || figure.high === null ? main : `${main} (${bounds(figure.low, figure.high, kind, units)})`;
+}
+
+export const BASIS_WORDS: Record<Basis, string> = {
+  measured: 'measured',
+  'estimated-from-measurements': 'estimated from measurements',
+  predicted: 'predicted from the openings',
+  assumed: 'assumed',
+};
+
+/** Seconds as "12 min" or "1 h 05 min". */
+export function duration(seconds: number | null): string {
+  if (seconds === null || !Number.isFinite(seconds)) return 'not known';
+  const minutes = Math.round(seconds / 60);
+  if (minutes < 60) return `${minutes} min`;
+  return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
+}
+
+/** An air change rate stored per second, as air changes per hour: "0.9 h⁻¹ (0.6–1.3 h⁻¹)". */
+export function airChanges(perSecond: Ranged, units: UnitSystem = 'si'): string {
+  const h = (v: number | null) => (v === null ? null : v * 3600);
+  return range({ value: h(perSecond.value), low: h(perSecond.low), high: h(perSecond.high) }, 'airChanges', units);
+}

@@ -1,0 +1,222 @@
+/**
+ * The open survey on site: its whole document (header, instruments, areas, rooms with their
+ * readings), the photos' descriptions, and the live findings. Screens edit the document in
+ * place and say what changed; each change is checked with the model's schema and autosaved —
+ * the header through a patch applied to the stored header, each room through its own autosave,
+ * readings, instruments, areas and photos as single records — and once a save has landed the
+ * analysis is asked to run again (on the survey as stored).
+ */
+import type { Area } from '../model/area.ts';
+import type { Instrument } from '../model/instrument.ts';
+import type { Photo } from '../model/photo.ts';
+import type { Reading } from '../model/reading.ts';
+import { roomSchema, type Room } from '../model/room.ts';
+import { surveySchema } from '../model/survey.ts';
+import type { DocumentRoom, SurveyDocument } from '../model/survey-document.ts';
+import { validationProblems, type ValidationProblem } from '../model/validation-problem.ts';
+import { duplicateRoom } from '../store/duplicate-room.ts';
+import { loadSurvey } from '../store/load-survey.ts';
+import { getPhotoBytes, listPhotos } from '../store/photos.ts';
+import { reorderRooms } from '../store/reorder-rooms.ts';
+import { getSurvey } from '../store/surveys.ts';
+import { saveArea, saveInstrument, saveReading, saveRoom } from '../store/survey-parts.ts';
+import { addPhoto, type PhotoPlace } from './add-photo.ts';
+import { Autosave } from './autosave.svelte.ts';
+import { LiveAnalysis } from './live-analysis.svelte.ts';
+import { connection } from './storage-connection.ts';
+import { knowHeader, updateSurveyHeader, type SurveyPatch } from './update-survey-header.ts';
+
+const message = (error: unknown) => (error instanceof Error ? error.message : String(error));
+
+class SurveyWalk {
+  doc = $state<SurveyDocument | null>(null);
+  photos = $state<Photo[]>([]);
+  loadError = $state<string | null>(null);
+  /** Problems with the header as edited, and with each room, by room id. */
+  headerProblems = $state<ValidationProblem[]>([]);
+  roomProblems = $state<Record<string, ValidationProblem[]>>({});
+  readonly analysis = new LiveAnalysis();
+  private patch: SurveyPatch = {};
+  private readonly roomSaves = new Map<string, Autosave<Room>>();
+  readonly header = new Autosave<SurveyPatch>({
+    form: 'survey header',
+    save: async (patch) => {
+      if (!this.doc) return;
+      await updateSurveyHeader(this.doc.survey.id, patch);
+      this.analyse();
+    },
+  });
+
+  /** Load a survey (unless it is already open). */
+  async open(surveyId: string): Promise<void> {
+    if (this.doc?.survey.id === surveyId) return;
+    await this.flushAll();
+    this.doc = null;
+    this.patch = {};
+    this.loadError = null;
+    this.analysis.clear();
+    try {
+      const [doc, photos] = await Promise.all([loadSurvey(connection, surveyId, { photos: false }), listPhotos(connection, surveyId)]);
+      if (!doc) {
+        this.loadError = 'This survey is not on this device (it may have been deleted).';
+        return;
+      }
+      this.analysis.request(surveyId, 0);
+      this.doc = doc;
+      knowHeader(doc.survey);
+      this.photos = photos;
+    } catch (error) {
+      this.loadError = message(error);
+    }
+  }
+
+  /** Forget the open survey (after saving what is pending), so the next open reads it afresh. */
+  async close(): Promise<void> {
+    await this.flushAll();
+    this.doc = null;
+    this.analysis.clear();
+  }
+
+  async flushAll(): Promise<void> {
+    await Promise.all([this.header.flush(), ...[...this.roomSaves.values()].map((save) => save.flush())]);
+  }
+
+  /** Read the stored header again (another screen changed it), unless edits here are waiting. */
+  async reloadHeader(): Promise<void> {
+    if (!this.doc || this.header.state !== 'saved') return;
+    const stored = await getSurvey(connection, this.doc.survey.id);
+    if (stored && this.doc?.survey.id === stored.id) {
+      knowHeader(stored);
+      this.doc.survey = stored;
+    }
+  }
+
+  room(roomId: string | null): DocumentRoom | undefined {
+    return this.doc?.rooms.find((r) => r.id === roomId);
+  }
+
+  /** Change header fields: shown at once, checked, and saved once typing pauses. */
+  patchSurvey(patch: SurveyPatch): void {
+    if (!this.doc) return;
+    Object.assign(this.doc.survey, patch);
+    this.patch = { ...this.patch, ...$state.snapshot(patch) };
+    const parsed = surveySchema.safeParse($state.snapshot(this.doc.survey));
+    if (!parsed.success) {
+      this.headerProblems = validationProblems(parsed.error);
+      this.header.refuse(this.headerProblems.map((p) => p.message).join('; '));
+      return;
+    }
+    this.headerProblems = [];
+    this.header.edit(this.patch);
+  }
+
+  /** The autosave of one room (its own, so edits to two rooms never replace each other). */
+  roomSave(roomId: string): Autosave<Room> {
+    let save = this.roomSaves.get(roomId);
+    if (!save) {
+      save = new Autosave<Room>({
+        form: `room ${roomId}`,
+        save: async (room) => {
+          await saveRoom(connection, this.doc!.survey.id, room);
+          this.analyse();
+        },
+      });
+      this.roomSaves.set(roomId, save);
+    }
+    return save;
+  }
+
+  /** A room was edited in place: check it, then save it once typing pauses. */
+  roomChanged(roomId: string, now = new Date()): void {
+    const room = this.room(roomId);
+    if (!room || !this.doc) return;
+    room.updatedAt = now.toISOString();
+    const { readings: _readings, ...record } = $state.snapshot(room);
+    const parsed = roomSchema.safeParse(record);
+    if (!parsed.success) {
+      const problems = validationProblems(parsed.error);
+      this.roomProblems[roomId] = problems;
+      this.roomSave(roomId).refuse(problems.map((p) => p.message).join('; '));
+      return;
+    }
+    this.roomProblems[roomId] = [];
+    this.roomSave(roomId).edit(parsed.data);
+  }
+
+  /** Save a new room (already complete and valid) last in the survey. */
+  async addRoom(room: Room): Promise<DocumentRoom> {
+    const saved = await saveRoom(connection, this.doc!.survey.id, room);
+    const added = { ...saved, readings: [] };
+    this.doc!.rooms.push(added);
+    this.analyse();
+    return added;
+  }
+
+  /** A copy of a room's size and openings, saved as a new room. */
+  async duplicate(roomId: string, now = new Date()): Promise<DocumentRoom> {
+    await this.roomSave(roomId).flush();
+    const copy = await duplicateRoom(connection, roomId, () => crypto.randomUUID(), now.toISOString());
+    const added = { ...copy, readings: [] };
+    this.doc!.rooms.push(added);
+    this.analyse();
+    return added;
+  }
+
+  /** Move a room one place up (-1) or down (+1) in the walking order. */
+  async move(roomId: string, by: -1 | 1): Promise<void> {
+    const rooms = this.doc!.rooms;
+    const from = rooms.findIndex((r) => r.id === roomId);
+    const to = from + by;
+    if (from < 0 || to < 0 || to >= rooms.length) return;
+    const order = rooms.map((r) => r.id);
+    [order[from], order[to]] = [order[to]!, order[from]!];
+    await reorderRooms(connection, this.doc!.survey.id, order);
+    const [room] = rooms.splice(from, 1);
+    rooms.splice(to, 0, room!);
+  }
+
+  async saveArea(area: Area, now = new Date()): Promise<void> {
+    const saved = await saveArea(connection, this.doc!.survey.id, $state.snapshot(area) as Area, now.toISOString());
+    this.upsert(this.doc!.areas, saved);
+    this.analyse();
+  }
+
+  async saveInstrument(instrument: Instrument, now = new Date()): Promise<void> {
+    const saved = await saveInstrument(connection, this.doc!.survey.id, $state.snapshot(instrument) as Instrument, now.toISOString());
+    this.upsert(this.doc!.instruments, saved);
+    this.analyse();
+  }
+
+  /** Save a reading of a room (the room's pending edits are saved first). */
+  async saveReading(roomId: string, reading: Reading, now = new Date()): Promise<Reading> {
+    await this.roomSave(roomId).flush();
+    const saved = await saveReading(connection, this.doc!.survey.id, roomId, $state.snapshot(reading) as Reading, now.toISOString());
+    this.upsert(this.room(roomId)!.readings, saved);
+    this.analyse();
+    return saved;
+  }
+
+  async addPhoto(file: Blob, place: Omit<PhotoPlace, 'surveyId'>): Promise<void> {
+    const photo = await addPhoto(file, { ...place, surveyId: this.doc!.survey.id });
+    this.photos.push(photo);
+  }
+
+  /** A photo's picture as an object URL (the caller revokes it), or undefined. */
+  async photoUrl(photoId: string): Promise<string | undefined> {
+    const bytes = await getPhotoBytes(connection, photoId);
+    return bytes && URL.createObjectURL(new Blob([bytes], { type: 'image/jpeg' }));
+  }
+
+  /** Stored data changed: the findings follow. */
+  private analyse(): void {
+    if (this.doc) this.analysis.request(this.doc.survey.id);
+  }
+
+  private upsert<T extends { id: string }>(list: T[], record: T): void {
+    const i = list.findIndex((x) => x.id === record.id);
+    if (i === -1) list.push(record);
+    else list[i] = record;
+  }
+}
+
+export const surveyWalk = new SurveyWalk();

@@ -1,0 +1,79 @@
+/** Plain words for the model's choices, as the room screens show them. */
+import type { Opening } from '../../model/opening.ts';
+import { APPLIANCE_LABELS } from '../../app/safety-items.ts';
+
+type Options<T extends string> = { id: T; label: string }[];
+const options = <T extends string>(labels: Record<T, string>): Options<T> =>
+  (Object.entries(labels) as [T, string][]).map(([id, label]) => ({ id, label }));
+
+export const CHECK = options({ yes: 'Yes', no: 'No', 'not-checked': 'Not checked' });
+export const OPERABILITY = options({ opens: 'Opens', restricted: 'Opens only a little', blocked: 'Blocked or shut', seized: 'Will not open' });
+export const WINDOW_STYLE = options({ hinged: 'Hinged', sash: 'Sash (slides up)', sliding: 'Slides sideways', louvre: 'Louvre', fixed: 'Fixed' });
+export const WINDOW_HINGE = options({ side: 'Side-hung', top: 'Top-hung', bottom: 'Bottom-hung', 'centre-pivot': 'Centre pivot', 'tilt-and-turn': 'Tilt and turn' });
+export const VENT_KIND = options({ 'background-vent': 'Trickle vent', 'air-brick': 'Air brick', grille: 'Grille' });
+export const VENT_PURPOSE = options({ room: 'Air for the room', 'sub-floor': 'Under-floor void', 'combustion-air': 'Combustion air' });
+export const LABEL_AREA_IS = options({ equivalent: 'Equivalent area', free: 'Free area', unknown: 'Not stated' });
+export const FAN_DIRECTION = options({ extract: 'Extract', supply: 'Supply' });
+export const ISOLATOR = options({ on: 'On', off: 'Off', none: 'None fitted', 'not-found': 'Not found' });
+export const DUCTING = options({ ducted: 'Ducted outside', recirculating: 'Recirculating', 'through-wall': 'Through the wall' });
+export const SEX = options({ mixed: 'Mixed', female: 'Female', male: 'Male' });
+export const FACING = options({ N: 'N', NE: 'NE', E: 'E', SE: 'SE', S: 'S', SW: 'SW', W: 'W', NW: 'NW' });
+
+
+/** A short name for an opening in lists ("2 × Window, hinged"). */
+export function openingName(o: Opening): string {
+  const what =
+    o.type === 'window'
+      ? `Window, ${WINDOW_STYLE.find((s) => s.id === o.style)?.label.toLowerCase()}`
+      : o.type === 'vent'
+        ? VENT_KIND.find((k) => k.id === o.kind)!.label
+        : o.type === 'fan'
+          ? `${o.direction === 'extract' ? 'Extract' : 'Supply'} fan`
+          : 'Door undercut';
+  return o.count > 1 ? `${o.count} × ${what}` : what;
+}
+
+export const QUANTITY_WORDS: Record<import('../../model/instrument.ts').MeasuredQuantity, string> = {
+  co2: 'CO₂',
+  temperature: 'Temperature',
+  'relative-humidity': 'Relative humidity',
+  'surface-temperature': 'Surface temperature',
+  airflow: 'Airflow (fan flow)',
+  'air-speed': 'Air speed',
+  pressure: 'Pressure',
+  'moisture-content': 'Moisture content',
+};
+
+/** Units of each quantity as stored (offsets of side-by-side checks are in these). */
+export const QUANTITY_UNITS: Record<import('../../model/instrument.ts').MeasuredQuantity, string> = {
+  co2: 'ppm',
+  temperature: '°C',
+  'relative-humidity': '%',
+  'surface-temperature': '°C',
+  airflow: 'm³/s',
+  'air-speed': 'm/s',
+  pressure: 'Pa',
+  'moisture-content': '%',
+};
+
+export const APPLIANCE_KIND = options({ ...APPLIANCE_LABELS, other: 'Other' });
+export const FLUE = options({ 'room-sealed': 'Room-sealed', 'open-flued': 'Open-flued', flueless: 'Flueless', 'not-known': 'Not known' });
+export const GAS_RECORD = options({ yes: 'Seen', no: 'Not available', 'not-checked': 'Not checked', 'not-applicable': 'Not applicable' });
+export const DEFECT_KIND = options({
+  mould: 'Mould',
+  condensation: 'Condensation',
+  leak: 'Leak or penetrating damp',
+  'fan-dead': 'Fan not working',
+  'vent-shut': 'Vent shut',
+  'vent-blocked': 'Vent blocked',
+  other: 'Other',
+});
+export const MOULD_PATTERN = options({
+  spots: 'Spots',
+  patches: 'Patches',
+  'external-corners': 'External corners',
+  'behind-furniture': 'Behind furniture',
+  'ceiling-edge': 'Ceiling edge',
+  'around-window': 'Around the window',
+  widespread: 'Widespread',
+});

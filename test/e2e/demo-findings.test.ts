@@ -1,0 +1,119 @@
+/**
+ * The demo surveys in Chromium at phone size: they load from the start screen, every room of
+ * every demo survey shows findings, every screen passes axe's WCAG 2 A/AA rules, the main actions
+ * work from the keyboard alone (Tab to them, then Enter or Space), and the page logs no error.
+ */
+import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
+import type { BrowserContext, Locator, Page } from 'playwright-core';
+import { openPhone } from '../support/browser.ts';
+import { axeViolations } from '../support/axe.ts';
+import { demoFile } from '../support/fixtures.ts';
+
+const baseURL = inject('baseURL');
+const demo = demoFile();
+
+/** Press Tab until `target` has the focus (at most `limit` times); fails if it never does. */
+async function tabTo(page: Page, target: Locator, limit = 200): Promise<void> {
+  for (let i = 0; i < limit; i += 1) {
+    await page.keyboard.press('Tab');
+    if (await target.evaluate((el) => el === document.activeElement)) return;
+  }
+  throw new Error(`Tab never reached ${target.toString()}`);
+}
+
+describe.skipIf(!baseURL)('demo surveys in Chromium (phone)', () => {
+  let context: BrowserContext;
+  let page: Page;
+  let close: () => Promise<void>;
+  const problems: string[] = [];
+
+  beforeAll(async () => {
+    ({ context, close } = await openPhone());
+    page = context.pages()[0] ?? (await context.newPage());
+    page.on('pageerror', (error) => problems.push(error.message));
+    page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
+    await page.goto(baseURL);
+  });
+
+  afterAll(async () => {
+    await close?.();
+  });
+
+  it('loads the demo surveys from the start screen, by keyboard', async () => {
+    await tabTo(page, page.getByRole('button', { name: 'Load the demo surveys (invented data)' }));
+    await page.keyboard.press('Enter');
+    await page.getByText(`Loaded ${demo.surveys.length} demo surveys (invented data).`).waitFor();
+    expect(await axeViolations(page)).toEqual([]);
+  });
+
+  for (const doc of demo.surveys) {
+    it(`shows findings for every room of “${doc.survey.title}”, with no WCAG 2 A/AA violations on its screens`, async () => {
+      await page.goto(`${baseURL}#/surveys`);
+      await page.getByRole('link', { name: doc.survey.title }).click();
+      await page.getByText('Findings are up to date.').waitFor({ timeout: 30_000 });
+      await expect(page.getByTestId('headline').count()).resolves.toBe(doc.rooms.length);
+      expect(await axeViolations(page)).toEqual([]);
+      for (const [i, room] of doc.rooms.entries()) {
+        await page.goto(`${baseURL}#/survey/${doc.survey.id}/room/${room.id}/findings`);
+        await page.getByRole('heading', { name: `Findings: ${room.name}` }).waitFor();
+        await page.getByTestId('headline').waitFor({ timeout: 30_000 });
+        await expect(page.getByTestId('headline').innerText()).resolves.toMatch(/Outdoor air: .*\d.*(L\/s)/);
+        if (i === 0) {
+          expect(await axeViolations(page)).toEqual([]);
+          await page.getByRole('link', { name: `← Back to ${room.name}` }).click();
+          await page.getByRole('heading', { name: room.name, exact: true }).waitFor();
+          expect(await axeViolations(page)).toEqual([]);
+        }
+      }
+    });
+  }
+
+  it('has no WCAG 2 A/AA violations on the start of visit, settings and guided test screens', async () => {
+    const doc = demo.surveys[0]!;
+    for (const [path, heading] of [
+      ['visit', 'Start of visit'],
+      ['details', 'Survey details'],
+      [`room/${doc.rooms[0]!.id}/test/decay`, `Decay test: ${doc.rooms[0]!.name}`],
+    ] as const) {
+      await page.goto(`${baseURL}#/survey/${doc.survey.id}/${path}`);
+      await page.getByRole('heading', { name: heading }).waitFor();
+      expect(await axeViolations(page), path).toEqual([]);
+    }
+  });
+
+  it('works from the keyboard: a reading, a copy of a room, a move, a delete and its undo', async () => {
+    const doc = demo.surveys[2]!;
+    const room = doc.rooms[1]!;
+    await page.goto(`${baseURL}#/survey/${doc.survey.id}/room/${room.id}`);
+    await page.getByRole('heading', { name: room.name, exact: true }).waitFor();
+    const before = await page.locator('#section-readings li').count();
+    await tabTo(page, page.getByRole('button', { name: 'Reading now' }));
+    await page.keyboard.press('Enter');
+    await expect(page.getByLabel('CO₂', { exact: true }).evaluate((el) => el === document.activeElement)).resolves.toBe(true);
+    await page.keyboard.type('812');
+    await tabTo(page, page.getByRole('button', { name: 'Save reading' }));
+    await page.keyboard.press('Space');
+    await expect.poll(() => page.locator('#section-readings li').count()).toBe(before + 1);
+
+    await page.goto(`${baseURL}#/survey/${doc.survey.id}`);
+    await tabTo(page, page.getByRole('button', { name: `Duplicate ${room.name} (size and openings only)` }));
+    await page.keyboard.press('Enter');
+    await page.getByRole('heading', { name: `${room.name} (copy)` }).waitFor();
+    await page.goto(`${baseURL}#/survey/${doc.survey.id}`);
+    await tabTo(page, page.getByRole('button', { name: `Move ${room.name} up` }));
+    await page.keyboard.press('Space');
+    await expect.poll(() => page.locator('.rooms .name').first().innerText()).toBe(room.name);
+
+    await page.goto(`${baseURL}#/surveys`);
+    await tabTo(page, page.getByRole('button', { name: `Delete ${doc.survey.title}` }));
+    await page.keyboard.press('Enter');
+    await page.getByText(`“${doc.survey.title}” deleted`).waitFor();
+    await tabTo(page, page.getByRole('button', { name: 'Undo delete' }));
+    await page.keyboard.press('Enter');
+    await page.getByRole('link', { name: doc.survey.title }).waitFor();
+  });
+
+  it('raised no error in the page throughout', () => {
+    expect(problems).toEqual([]);
+  });
+});
