@@ -6,7 +6,9 @@
  * Examples: quantity(0.0523, 'flow') = '52.5 L/s'; range({ value: 0.01, low: 0.008, high: 0.013 },
  * 'flow') = '10 L/s (8–13 L/s)'.
  */
-import { displayQuantity, type QuantityKind, type UnitSystem } from '../core/units.ts';
+import { displayQuantity, perHour, roundToStep, type QuantityKind, type UnitSystem } from '../core/units.ts';
+import { metricQuantityKind } from '../core/criteria/metric-quantity.ts';
+import type { CriterionMetric } from '../core/criteria/criterion.ts';
 import type { Basis, Ranged } from '../analysis/results.ts';
 
 const NUMBER = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 6 });
@@ -56,4 +58,16 @@ export function duration(seconds: number | null): string {
 export function airChanges(perSecond: Ranged, units: UnitSystem = 'si'): string {
   const h = (v: number | null) => (v === null ? null : v * 3600);
   return range({ value: h(perSecond.value), low: h(perSecond.low), high: h(perSecond.high) }, 'airChanges', units);
+}
+
+/**
+ * A criterion check's figure (its value or limit, SI in the metric's unit) as people read it.
+ * Example: criterionFigure('co2-above-outdoor', 800) = '800 ppm'; ('air-change-rate', 1/900) = '4 h⁻¹'.
+ */
+export function criterionFigure(metric: CriterionMetric, si: number | null, units: UnitSystem = 'si'): string {
+  if (si === null || !Number.isFinite(si)) return 'not known';
+  if (metric === 'opening-area-fraction') return `${roundToStep(si * 100, 0.1)}% of floor area`;
+  const kind = metricQuantityKind(metric);
+  if (!kind) return String(si);
+  return quantity(kind === 'airChanges' ? perHour(si) : si, kind, units);
 }

@@ -18,6 +18,8 @@ export type {
   RoomResults,
   ScenarioResult,
   AnalysisWarning,
+  RoomJudgement,
+  AreaJudgement,
 } from '../analysis/results.ts';
 
 /** Quiet time after the last save before the analysis runs, ms. */

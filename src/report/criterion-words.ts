@@ -5,6 +5,7 @@
  *
  * Example: statusWords('design-guidance-new-work') = 'design guidance for new work'.
  */
+import { metricQuantityKind } from '../core/criteria/metric-quantity.ts';
 import type { AveragingPeriod, CriterionMetric, CriterionSource, CriterionStatus } from '../core/criteria/criterion.ts';
 import type { QuantityKind } from '../core/units.ts';
 
@@ -32,22 +33,6 @@ const PERIOD: Record<AveragingPeriod, string> = {
   'not-applicable': 'no averaging (a duty)',
 };
 
-const METRIC_KIND: Record<CriterionMetric, QuantityKind | null> = {
-  'co2-absolute': 'co2',
-  'co2-above-outdoor': 'co2',
-  'flow-per-person': 'flowPerPerson',
-  // Judged as the room's total outdoor air against q_p·people + q_B·floor area.
-  'flow-per-person-and-area': 'flow',
-  'flow-per-floor-area': 'flowPerArea',
-  'whole-dwelling-flow': 'flow',
-  'extract-flow': 'flow',
-  'air-change-rate': 'airChanges',
-  'ventilator-equivalent-area': 'ventArea',
-  'door-undercut-area': 'ventArea',
-  'opening-area-fraction': null,
-  'surface-rh': 'relativeHumidity',
-  'qualitative-duty': null,
-};
 
 export function statusWords(status: CriterionStatus): string {
   return STATUS[status];
@@ -59,7 +44,7 @@ export function periodWords(period: AveragingPeriod): string {
 
 /** The display kind of a metric's unit, or null for a fraction or a duty without a number. */
 export function metricKind(metric: CriterionMetric): QuantityKind | null {
-  return METRIC_KIND[metric];
+  return metricQuantityKind(metric);
 }
 
 /** 'BB101 (2018), Table 3'. */
