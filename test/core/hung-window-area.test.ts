@@ -31,7 +31,9 @@ describe('top- and bottom-hung window coefficient (src/core/hung-window-area.ts)
     fc.assert(
       fc.property(fc.double({ min: 0, max: 90, noNaN: true }), fc.double({ min: 0, max: 90, noNaN: true }), (x, y) => {
         const [lo, hi] = x < y ? [x, y] : [y, x];
-        expect(hungWindowCoefficient(hi)).toBeGreaterThanOrEqual(hungWindowCoefficient(lo));
+        // Within rounding: angles a hair apart may round the cubic either way (the polynomial's
+        // derivative is positive everywhere on 0–90°, its discriminant being negative).
+        expect(hungWindowCoefficient(hi)).toBeGreaterThanOrEqual(hungWindowCoefficient(lo) - 1e-12);
       }),
     );
   });
