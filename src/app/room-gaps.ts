@@ -1,6 +1,7 @@
 /**
  * What is still missing for a room, in the surveyor's words, most useful first: people, openings,
- * a reading, a measured fan flow, the safety checks of a combustion appliance.
+ * a reading, a measured fan flow, the safety checks of a combustion appliance, and, for a room
+ * with a window, its outside wall (the mould check needs its construction or a measured factor).
  *
  * Example: a room with no openings and no readings → ['openings', 'a reading'].
  */
@@ -16,5 +17,7 @@ export function roomGaps(room: DocumentRoom): string[] {
     [a.coAlarmPresent, a.coAlarmTested, a.combustionAirVentPresent].includes('not-checked'),
   );
   if (unchecked) gaps.push('appliance safety checks');
+  // A room with a window has an outside wall; an inside room has none to record.
+  if (room.exposedWalls.length === 0 && room.openings.some((o) => o.type === 'window')) gaps.push('outside wall');
   return gaps;
 }

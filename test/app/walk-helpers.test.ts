@@ -29,6 +29,11 @@ describe('walk helpers', () => {
     r.openings.push({ type: 'fan', id: crypto.randomUUID(), count: 1, condition: '', direction: 'extract', humidistat: 'no', isolator: 'on', ducting: 'ducted' });
     r.readings.push({ id: crypto.randomUUID(), time: '2026-01-14T09:10:00+00:00', co2_ppm: 900, conditions: startingConditions(r), note: '' });
     expect(roomGaps(r)).toEqual(['fan flow measured']);
+    // A window means an outside wall, which the mould check needs.
+    r.openings.push({ type: 'window', id: crypto.randomUUID(), count: 1, condition: '', style: 'hinged', restrictor: 'no', operability: 'opens' });
+    expect(roomGaps(r)).toEqual(['fan flow measured', 'outside wall']);
+    r.exposedWalls.push({ id: crypto.randomUUID(), construction: 'cavity-unfilled' });
+    expect(roomGaps(r)).toEqual(['fan flow measured']);
   });
 
   it('first-reading conditions come from the room: its people in, no fans when it has none', () => {

@@ -77,3 +77,12 @@ export const MOULD_PATTERN = options({
   'around-window': 'Around the window',
   widespread: 'Widespread',
 });
+export const WALL_CONSTRUCTION = options({
+  'solid-masonry': 'Solid brick or stone',
+  'cavity-unfilled': 'Cavity wall, not filled',
+  'cavity-filled': 'Cavity wall, filled',
+  'timber-frame': 'Timber frame',
+  'insulated-solid': 'Solid wall, insulated',
+  'curtain-wall': 'Glazed curtain wall',
+  other: 'Other',
+});
