@@ -18,6 +18,7 @@ import { duplicateRoom } from '../store/duplicate-room.ts';
 import { loadSurvey } from '../store/load-survey.ts';
 import { getPhotoBytes, listPhotos } from '../store/photos.ts';
 import { reorderRooms } from '../store/reorder-rooms.ts';
+import { deleteReading, deleteRoom } from '../store/remove-parts.ts';
 import { getSurvey } from '../store/surveys.ts';
 import { saveArea, saveInstrument, saveReading, saveRoom } from '../store/survey-parts.ts';
 import { addPhoto, type PhotoPlace } from './add-photo.ts';
@@ -173,6 +174,27 @@ class SurveyWalk {
     await reorderRooms(connection, this.doc!.survey.id, order);
     const [room] = rooms.splice(from, 1);
     rooms.splice(to, 0, room!);
+  }
+
+  /** Remove a room entered by mistake, with its readings, photos and logger series. */
+  async removeRoom(roomId: string, now = new Date()): Promise<void> {
+    await this.roomSave(roomId).flush();
+    await deleteRoom(connection, this.doc!.survey.id, roomId, now.toISOString());
+    this.doc!.rooms = this.doc!.rooms.filter((r) => r.id !== roomId);
+    this.photos = this.photos.filter((p) => p.roomId !== roomId);
+    this.analyse();
+  }
+
+  /** Remove a reading entered by mistake; it leaves any test that grouped it. */
+  async removeReading(roomId: string, readingId: string, now = new Date()): Promise<void> {
+    await this.roomSave(roomId).flush();
+    await deleteReading(connection, this.doc!.survey.id, readingId, now.toISOString());
+    const room = this.room(roomId)!;
+    room.readings = room.readings.filter((r) => r.id !== readingId);
+    room.tests = room.tests
+      .map((t) => ({ ...t, readingIds: t.readingIds.filter((id) => id !== readingId) }))
+      .filter((t) => t.readingIds.length >= 2);
+    this.analyse();
   }
 
   async saveArea(area: Area, now = new Date()): Promise<void> {

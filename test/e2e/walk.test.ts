@@ -181,6 +181,25 @@ describe.skipIf(!baseURL)('the walk in Chromium (phone)', () => {
     }
   });
 
+  it('removes a reading and a room, each only after a second tap', async () => {
+    await page.getByRole('link', { name: '← Termly walk-round, Block D (invented)' }).first().click();
+    await page.getByRole('link', { name: 'Classroom D2', exact: true }).click();
+    await page.getByRole('button', { name: /^Remove the \d\d:\d\d reading$/ }).first().click();
+    await page.getByRole('button', { name: 'Yes, remove it' }).click();
+    await page.getByText('Tests recorded: Decay (4 readings).').waitFor();
+    await page.getByRole('link', { name: '← Termly walk-round, Block D (invented)' }).click();
+    await page.getByRole('link', { name: 'Classroom D1', exact: true }).click();
+    await page.getByRole('button', { name: 'Remove this room' }).click();
+    await page.getByRole('button', { name: 'Keep it' }).click();
+    await page.getByRole('button', { name: 'Remove this room' }).click();
+    await page.getByRole('button', { name: 'Yes, remove it' }).click();
+    await page.getByRole('link', { name: 'Classroom D2', exact: true }).waitFor();
+    expect(await page.getByRole('link', { name: 'Classroom D1', exact: true }).count()).toBe(0);
+    await page.reload();
+    await page.getByRole('link', { name: 'Classroom D2', exact: true }).waitFor();
+    expect(await page.getByRole('link', { name: 'Classroom D1', exact: true }).count()).toBe(0);
+  });
+
   it('raised no error in the page throughout', () => {
     expect(problems).toEqual([]);
   });

@@ -1,0 +1,69 @@
+/**
+ * Removing what was entered by mistake: a room (with its readings, photos and logger series) or
+ * one reading (taken out of any test that grouped it; a test left with fewer than two readings
+ * goes too). One transaction each, strict durability, saved only after `tx.done`; like any edit,
+ * it moves an issued revision on to the next and the survey's last change to `changedAt`.
+ */
+import type { IDBPTransaction } from 'idb';
+import { editableRevision } from '../model/revision-lock.ts';
+import type { Connection } from './connection.ts';
+import { StorageError } from './connection.ts';
+import { ofSurvey, type SurveyPartStore, type VentwalkDB } from './schema.ts';
+import { commitNow, queue } from './write-requests.ts';
+
+type RemoveTx = IDBPTransaction<VentwalkDB, ('surveys' | SurveyPartStore)[], 'readwrite'>;
+
+/** Open the transaction, check the survey, run `remove` (IDB calls only), touch the header, commit. */
+async function removeIn(
+  connection: Connection,
+  stores: SurveyPartStore[],
+  surveyId: string,
+  changedAt: string,
+  remove: (tx: RemoveTx) => Promise<string | undefined>,
+): Promise<void> {
+  await connection.run(async (db) => {
+    const tx = db.transaction(['surveys', ...stores], 'readwrite', { durability: 'strict' }) as unknown as RemoveTx;
+    const survey = await tx.objectStore('surveys').get(surveyId);
+    const refusal = survey ? await remove(tx) : 'This survey is no longer on the device';
+    if (refusal || !survey) {
+      tx.abort();
+      await tx.done.catch(() => undefined);
+      throw new StorageError(refusal ?? 'This survey is no longer on the device', 'failed');
+    }
+    const later = Date.parse(changedAt) > Date.parse(survey.updatedAt) ? changedAt : survey.updatedAt;
+    queue(tx.objectStore('surveys').put({ ...editableRevision(survey), updatedAt: later }));
+    commitNow(tx);
+    await tx.done;
+  });
+}
+
+/** Delete a room of a survey with its readings, photos and logger series. */
+export async function deleteRoom(connection: Connection, surveyId: string, roomId: string, changedAt: string): Promise<void> {
+  await removeIn(connection, ['rooms', 'readings', 'photos', 'series'], surveyId, changedAt, async (tx) => {
+    const room = await tx.objectStore('rooms').get(roomId);
+    if (room?.surveyId !== surveyId) return 'This room is not in the survey';
+    queue(tx.objectStore('rooms').delete(roomId));
+    for (const store of ['readings', 'photos', 'series'] as const) {
+      const records = await tx.objectStore(store).index('bySurvey').getAll(ofSurvey(surveyId));
+      for (const r of records) if ((r as { roomId?: string }).roomId === roomId) queue(tx.objectStore(store).delete(r.id));
+    }
+    return undefined;
+  });
+}
+
+/** Delete one reading, and take it out of the tests of its room. */
+export async function deleteReading(connection: Connection, surveyId: string, readingId: string, changedAt: string): Promise<void> {
+  await removeIn(connection, ['readings', 'rooms'], surveyId, changedAt, async (tx) => {
+    const reading = await tx.objectStore('readings').get(readingId);
+    if (reading?.surveyId !== surveyId) return 'This reading is not in the survey';
+    queue(tx.objectStore('readings').delete(readingId));
+    const room = await tx.objectStore('rooms').get(reading.roomId);
+    if (room && room.tests.some((t) => t.readingIds.includes(readingId))) {
+      const tests = room.tests
+        .map((t) => ({ ...t, readingIds: t.readingIds.filter((id) => id !== readingId) }))
+        .filter((t) => t.readingIds.length >= 2);
+      queue(tx.objectStore('rooms').put({ ...room, tests, updatedAt: changedAt }));
+    }
+    return undefined;
+  });
+}
