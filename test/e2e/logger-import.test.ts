@@ -65,6 +65,8 @@ describe.skipIf(!baseURL)('logger file on a room (phone, offline)', () => {
       await expect(section.getByText(/day-first dates/).count()).resolves.toBe(1);
       await expect(section.getByText('121 kept of 121 rows').count()).resolves.toBe(1);
       expect(await axeViolations(page, '#section-logger')).toEqual([]);
+      await section.screenshot({ path: 'test-results/walk/logger-section.png' });
+      await section.locator('figure').screenshot({ path: 'test-results/walk/logger-chart.png' });
 
       const decay = section.locator('li.period').filter({ hasText: 'Decay,' });
       await expect(decay.getByText(/Suggested: accept/).count()).resolves.toBe(1);
@@ -83,6 +85,54 @@ describe.skipIf(!baseURL)('logger file on a room (phone, offline)', () => {
       expect(problems).toEqual([]);
     } finally {
       await context.setOffline(false);
+      await close();
+    }
+  });
+
+  it('says why a file cannot be read, asks the date order when the file cannot tell, takes column changes and keeps an outdoor logger', async () => {
+    const { context, close } = await openPhone();
+    const page = context.pages()[0] ?? (await context.newPage());
+    const problems: string[] = [];
+    page.on('pageerror', (error) => problems.push(error.message));
+    page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
+    try {
+      await page.goto(baseURL);
+      await page.getByRole('button', { name: 'Load the demo surveys (invented data)' }).click();
+      await page.getByText(`Loaded ${demo.surveys.length} demo surveys (invented data).`).waitFor();
+      const doc = demo.surveys[0]!;
+      const room = doc.rooms[1] ?? doc.rooms[0]!;
+      await page.goto(`${baseURL}#/survey/${doc.survey.id}/room/${room.id}`);
+      await page.getByRole('heading', { name: room.name, exact: true }).waitFor();
+      const section = page.locator('#section-logger');
+      const choose = page.getByLabel(/Choose (another )?logger file/);
+
+      await choose.setInputFiles({ name: 'photo.csv', mimeType: 'text/csv', buffer: Buffer.from([0, 1, 2, 255, 0, 3, 0, 0, 9]) });
+      await section.getByRole('alert').getByText('photo.csv could not be read.').waitFor();
+      await expect(section.getByRole('alert').innerText()).resolves.toContain('binary data');
+
+      // One date throughout, so day-first and month-first both fit: the file cannot tell.
+      const rows = ['Time,CO2'];
+      for (let k = 0; k < 30; k++) rows.push(`03/04/2026 10:${String(k * 2).padStart(2, '0')},${800 - k}`);
+      await choose.setInputFiles({ name: 'one-day.csv', mimeType: 'text/csv', buffer: Buffer.from(rows.join('\n')) });
+      await section.getByText('Day first or month first?').waitFor();
+      await expect(section.getByRole('cell', { name: '2026-03-04' }).count()).resolves.toBeGreaterThan(0);
+      expect(await axeViolations(page, '#section-logger')).toEqual([]);
+      await section.getByRole('button', { name: 'Day first' }).click();
+      await section.getByTestId('column-co2').getByText('“CO2”', { exact: false }).waitFor();
+      await expect(section.getByText(/day-first dates/).count()).resolves.toBe(1);
+
+      await section.getByRole('group', { name: 'CO₂ (ppm)' }).getByRole('button', { name: 'None' }).click();
+      // With no value column left the file cannot be read: it says so and keeps the column choices.
+      await section.getByRole('alert').getByText('No column of CO2, temperature or humidity', { exact: false }).waitFor();
+      await expect(section.getByTestId('column-co2').innerText()).resolves.toContain('Not chosen');
+      await section.getByRole('group', { name: 'CO₂ (ppm)' }).getByRole('button', { name: 'CO2' }).click();
+      await section.getByTestId('column-co2').getByText('“CO2”', { exact: false }).waitFor();
+
+      await section.getByLabel(/This is the outdoor logger/).check();
+      await section.getByRole('button', { name: 'Save as the outdoor logger' }).click();
+      await section.getByText('Saved one-day.csv as the outdoor logger.').waitFor();
+      expect(problems).toEqual([]);
+    } finally {
       await close();
     }
   });
