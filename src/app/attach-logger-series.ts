@@ -14,6 +14,8 @@ import { loggerSeriesRecord } from '../ingest/logger-series-record.ts';
 import { surveyWalk } from './survey-walk.svelte.ts';
 
 export interface AttachLoggerInput {
+  /** The series' id when saving it again (a changed choice replaces the stored record). */
+  id?: string;
   fileName: string;
   series: LoggerSeriesData;
   report: ImportReport;
@@ -22,11 +24,11 @@ export interface AttachLoggerInput {
   accepted: readonly FittedPeriod[];
 }
 
-export type AttachLoggerResult = { ok: true; leftOut: number; warnings: string[] } | { ok: false; message: string };
+export type AttachLoggerResult = { ok: true; id: string; leftOut: number; warnings: string[] } | { ok: false; message: string };
 
 export async function attachLoggerSeries(input: AttachLoggerInput, newId: () => string = () => crypto.randomUUID()): Promise<AttachLoggerResult> {
   const built = loggerSeriesRecord({
-    id: newId(),
+    id: input.id ?? newId(),
     sourceFile: input.fileName,
     series: input.series,
     report: input.report,
@@ -39,5 +41,5 @@ export async function attachLoggerSeries(input: AttachLoggerInput, newId: () => 
   } catch (error) {
     return { ok: false, message: `Not saved: ${error instanceof Error ? error.message : String(error)}` };
   }
-  return { ok: true, leftOut: built.leftOut, warnings: built.warnings.map((w) => w.message) };
+  return { ok: true, id: built.record.id, leftOut: built.leftOut, warnings: built.warnings.map((w) => w.message) };
 }

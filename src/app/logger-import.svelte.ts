@@ -64,12 +64,15 @@ export class LoggerImport {
   saved = $state<string | null>(null);
   saveError = $state<string | null>(null);
   private ticket = 0;
+  /** The stored series' id once this file has been saved: saving again replaces it, never adds a second. */
+  private savedId: string | undefined;
 
   constructor(private readonly facts: () => LoggerRoomFacts) {}
 
   /** A new file: forget the previous one's choices and read it. */
   async choose(file: File): Promise<void> {
     this.file = file;
+    this.savedId = undefined;
     this.dateOrder = undefined;
     this.columns = {};
     this.saved = null;
@@ -159,6 +162,7 @@ export class LoggerImport {
     this.saveError = null;
     const accepted = analysis.periods.filter((_, i) => this.decisions[i] === 'accepted');
     const result = await attachLoggerSeries({
+      ...(this.savedId ? { id: this.savedId } : {}),
       fileName: this.file.name,
       series: analysis.series,
       report: analysis.report,
@@ -170,18 +174,8 @@ export class LoggerImport {
       this.saveError = result.message;
       return;
     }
+    this.savedId = result.id;
     const where = this.outdoor ? 'as the outdoor logger' : `with this room, ${accepted.length} accepted period${accepted.length === 1 ? '' : 's'}`;
     this.saved = [`Saved ${this.file.name} ${where}.`, ...result.warnings].join(' ');
-  }
-
-  /** Put the file down (nothing saved is touched). */
-  clear(): void {
-    this.ticket++;
-    this.file = null;
-    this.analysis = null;
-    this.decisions = {};
-    this.reading = false;
-    this.saved = null;
-    this.saveError = null;
   }
 }

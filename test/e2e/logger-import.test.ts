@@ -75,6 +75,10 @@ describe.skipIf(!baseURL)('logger file on a room (phone, offline)', () => {
       await expect(decay.getByRole('button', { name: /^Accept/ }).getAttribute('aria-pressed')).resolves.toBe('true');
       await section.getByRole('button', { name: 'Save to this room' }).click();
       await section.getByText('Saved room-logger.csv with this room, 1 accepted period.').waitFor();
+      // Saving again replaces the stored series rather than adding a second copy.
+      await section.getByRole('button', { name: 'Reject A' }).click();
+      await section.getByRole('button', { name: 'Save to this room' }).click();
+      await section.getByText('Saved room-logger.csv with this room, 1 accepted period.').waitFor();
       expect(await axeViolations(page, '#section-logger')).toEqual([]);
 
       await page.getByRole('link', { name: 'Findings', exact: true }).click();
@@ -82,6 +86,7 @@ describe.skipIf(!baseURL)('logger file on a room (phone, offline)', () => {
       const measured = page.locator('li.item').filter({ hasText: 'Decay from the logger file' });
       await measured.waitFor({ timeout: 30_000 });
       await expect(measured.innerText()).resolves.toMatch(/Outdoor air: \d[\d.]* L\/s/);
+      await expect(measured.count()).resolves.toBe(1);
       expect(problems).toEqual([]);
     } finally {
       await context.setOffline(false);
