@@ -8,6 +8,7 @@
  */
 import type { Area } from '../model/area.ts';
 import type { Instrument } from '../model/instrument.ts';
+import type { LoggerSeries } from '../model/logger-series.ts';
 import type { Photo } from '../model/photo.ts';
 import type { Reading } from '../model/reading.ts';
 import { roomSchema, type Room } from '../model/room.ts';
@@ -20,7 +21,7 @@ import { getPhotoBytes, listPhotos } from '../store/photos.ts';
 import { reorderRooms } from '../store/reorder-rooms.ts';
 import { deleteReading, deleteRoom } from '../store/remove-parts.ts';
 import { getSurvey } from '../store/surveys.ts';
-import { saveArea, saveInstrument, saveReading, saveRoom } from '../store/survey-parts.ts';
+import { saveArea, saveInstrument, saveReading, saveRoom, saveSeries } from '../store/survey-parts.ts';
 import { addPhoto, type PhotoPlace } from './add-photo.ts';
 import { Autosave } from './autosave.svelte.ts';
 import { LiveAnalysis } from './live-analysis.svelte.ts';
@@ -214,6 +215,14 @@ class SurveyWalk {
     await this.roomSave(roomId).flush();
     const saved = await saveReading(connection, this.doc!.survey.id, roomId, $state.snapshot(reading) as Reading, now.toISOString());
     this.upsert(this.room(roomId)!.readings, saved);
+    this.analyse();
+    return saved;
+  }
+
+  /** Save a logger series (a room's or the outdoor logger's); the findings follow. */
+  async saveSeries(series: LoggerSeries, now = new Date()): Promise<LoggerSeries> {
+    const saved = await saveSeries(connection, this.doc!.survey.id, series, now.toISOString());
+    this.upsert(this.doc!.series, saved);
     this.analyse();
     return saved;
   }

@@ -7,11 +7,12 @@ const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/
 
 type AxeRun = (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; help: string; nodes: unknown[] }> }>;
 
-export async function axeViolations(page: Page): Promise<string[]> {
+/** Violations on the whole page, or only inside the element `selector` names (e.g. one section). */
+export async function axeViolations(page: Page, selector?: string): Promise<string[]> {
   await page.addScriptTag({ content: axeSource });
-  const result = await page.evaluate(async () => {
+  const result = await page.evaluate(async (within) => {
     const axe = (window as unknown as { axe: { run: AxeRun } }).axe;
-    return axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa'] } });
-  });
+    return axe.run(within ? ({ include: [within] } as unknown as Document) : document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa'] } });
+  }, selector ?? null);
   return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.length} nodes)`);
 }
