@@ -77,6 +77,14 @@ class SurveyWalk {
     this.analysis.clear();
   }
 
+  /** Read the open survey again from storage (rooms were added by another use case, e.g. a room list). */
+  async reload(): Promise<void> {
+    const surveyId = this.doc?.survey.id;
+    if (!surveyId) return;
+    await this.close();
+    await this.open(surveyId);
+  }
+
   async flushAll(): Promise<void> {
     await Promise.all([this.header.flush(), ...[...this.roomSaves.values()].map((save) => save.flush())]);
   }
