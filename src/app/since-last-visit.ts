@@ -42,5 +42,9 @@ const figureWords = (c: FigureChange) =>
 export function roomChangeLine(change: RoomChange): string {
   if (change.overall === 'new-room') return 'Since last visit: a new room this time, nothing to compare.';
   const overall = change.overall === 'no-clear-change' ? 'no clear change' : change.overall;
-  return `Since last visit: ${overall}. Supply ${figureWords(change.supply_m3s)}, steady CO₂ ${figureWords(change.steadyCo2_ppm)}.`;
+  const levels = [
+    ['priority', change.priority] as const,
+    ['mould risk', change.mouldRisk] as const,
+  ].flatMap(([label, c]) => (c.outcome === 'better' || c.outcome === 'worse' ? [`, ${label} ${c.outcome}`] : []));
+  return `Since last visit: ${overall}. Supply ${figureWords(change.supply_m3s)}, steady CO₂ ${figureWords(change.steadyCo2_ppm)}${levels.join('')}.`;
 }
