@@ -10,7 +10,10 @@
  *    them so they can be fixed in the file and read again, or typed in.
  */
 import { readRoomList, type OccupantDefaults, type RoomListResult } from '../ingest/room-list.ts';
-import type { RoomListOverrides } from '../ingest/room-list-columns.ts';
+import { ROOM_LIST_ROLE_LABELS, type RoomListOverrides } from '../ingest/room-list-columns.ts';
+
+export type { RoomListResult };
+export { ROOM_LIST_ROLE_LABELS };
 import type { RoomUse } from '../core/room-uses.ts';
 import { loadSurvey } from '../store/load-survey.ts';
 import { addAreasAndRooms } from '../store/add-rooms.ts';

@@ -13,6 +13,7 @@ import { loadSurvey } from '../store/load-survey.ts';
 import { canShareFile, downloadFile, shareFile } from './deliver-file.ts';
 import { deviceStatus } from './device-status.svelte.ts';
 import { connection } from './storage-connection.ts';
+import { sinceLastVisit } from './since-last-visit.ts';
 
 export type ReportPhase = 'idle' | 'working' | 'ready' | 'cancelled' | 'failed';
 
@@ -60,7 +61,11 @@ class ReportMaker {
       await yieldToPage();
       if (controller.signal.aborted) throw new DOMException('cancelled', 'AbortError');
       const results = analyseSurvey(doc);
-      const model = buildReport(doc, results, { issueDate: localDate(now), appVersion: __APP_VERSION__ });
+      // A repeat visit gains "Since the last visit" (when the earlier survey is still on the device).
+      const since = doc.survey.previousSurveyId === undefined ? null : await sinceLastVisit(surveyId);
+      if (controller.signal.aborted) throw new DOMException('cancelled', 'AbortError');
+      const previousVisit = since?.status === 'compared' ? { previousVisit: since.comparison } : {};
+      const model = buildReport(doc, results, { issueDate: localDate(now), appVersion: __APP_VERSION__, ...previousVisit });
       this.step = 'Drawing the report';
       const { renderReportPdf } = await import('../report/pdf/render-report-pdf.ts');
       const bytes = await renderReportPdf(model, {

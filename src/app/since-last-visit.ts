@@ -8,7 +8,9 @@
  * no longer on the device (restore it from a backup to compare).
  */
 import { analyseSurvey, type AnalysisOptions } from '../analysis/analyse-survey.ts';
-import { compareVisits, type VisitComparison } from '../analysis/compare-visits.ts';
+import { compareVisits, type FigureChange, type RoomChange, type VisitComparison } from '../analysis/compare-visits.ts';
+
+export type { RoomChange, VisitComparison };
 import { loadSurvey } from '../store/load-survey.ts';
 import { connection } from './storage-connection.ts';
 
@@ -28,4 +30,21 @@ export async function sinceLastVisit(surveyId: string, options: AnalysisOptions 
     { document: current, results: analyseSurvey(current, options) },
   );
   return { status: 'compared', comparison };
+}
+
+const figureWords = (c: FigureChange) =>
+  c.outcome === 'not-compared' ? 'not compared' : c.outcome === 'no-clear-change' ? 'no clear change' : `${c.outcome} (${c.better ? 'better' : 'worse'})`;
+
+/**
+ * One line for a room's card. Example: a classroom given more vents →
+ * 'Since last visit: better. Supply higher (better), steady CO₂ lower (better).'
+ */
+export function roomChangeLine(change: RoomChange): string {
+  if (change.overall === 'new-room') return 'Since last visit: a new room this time, nothing to compare.';
+  const overall = change.overall === 'no-clear-change' ? 'no clear change' : change.overall;
+  const levels = [
+    ['priority', change.priority] as const,
+    ['mould risk', change.mouldRisk] as const,
+  ].flatMap(([label, c]) => (c.outcome === 'better' || c.outcome === 'worse' ? [`, ${label} ${c.outcome}`] : []));
+  return `Since last visit: ${overall}. Supply ${figureWords(change.supply_m3s)}, steady CO₂ ${figureWords(change.steadyCo2_ppm)}${levels.join('')}.`;
 }

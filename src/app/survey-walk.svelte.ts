@@ -79,6 +79,21 @@ class SurveyWalk {
     this.analysis.clear();
   }
 
+  /**
+   * Read the open survey again from storage, in place (the screen stays): rooms and areas were
+   * added by another use case, e.g. a room list. Pending edits are saved first.
+   */
+  async reload(): Promise<void> {
+    const surveyId = this.doc?.survey.id;
+    if (!surveyId) return;
+    await this.flushAll();
+    const doc = await loadSurvey(connection, surveyId, { photos: false });
+    if (!doc || this.doc?.survey.id !== surveyId) return;
+    this.doc = doc;
+    knowHeader(doc.survey);
+    this.analyse();
+  }
+
   async flushAll(): Promise<void> {
     await Promise.all([this.header.flush(), ...[...this.roomSaves.values()].map((save) => save.flush())]);
   }

@@ -4,7 +4,7 @@
  * nothing of substance; every number in it is one of the analysis's numbers converted to display
  * units and rounded (report-figure.ts), so the app, the command line and the paper agree.
  *
- * Sections, in reading order: front matter, summary, rooms to fix (ranked), a sheet per room,
+ * Sections, in reading order: front matter, summary, since the last visit (repeat visits), rooms to fix (ranked), a sheet per room,
  * dwellings, instruments, methods, criteria, limitations and cautions, sign-off, appendix.
  * Judgement-dependent parts (priority, checks, fixes, moisture findings) come from the
  * judgement view (judgement-view.ts); without it the report ranks by the headline figures,
@@ -28,6 +28,8 @@ import { loggerCharts, readingRows } from './readings-appendix.ts';
 import { dwellingPages } from './dwelling-pages.ts';
 import { reportFileName } from './report-file-name.ts';
 import { summaryOf } from './report-summary.ts';
+import type { VisitComparison } from '../analysis/compare-visits.ts';
+import { sinceLastVisitSection, type SinceLastVisitSection } from './since-last-visit.ts';
 
 export interface ReportOptions {
   /** Date of issue, ISO (2026-01-20). A parameter, so the same inputs give the same report. */
@@ -38,6 +40,8 @@ export interface ReportOptions {
   checkedBy?: string;
   /** The judgement to report; default: judgementView(results). */
   judgement?: ReportJudgementView | null;
+  /** This survey compared with the one it started from (compareVisits); gives the "Since the last visit" section. */
+  previousVisit?: VisitComparison;
 }
 
 /** A chart as data: the renderer turns it into geometry with src/chart/time-chart.ts. */
@@ -155,6 +159,8 @@ export interface ReportModel {
     outdoor: string;
   };
   summary: ReportSummary;
+  /** Present when the survey started from an earlier one and that survey was compared. */
+  sinceLastVisit: SinceLastVisitSection | null;
   ranked: { basis: string; rows: RankedRoom[] };
   rooms: RoomSheet[];
   dwellings: DwellingPage[];
@@ -228,6 +234,7 @@ export function buildReport(doc: SurveyDocument, results: AnalysisResults, optio
       outdoor: `Outdoor CO2 used: ${displayNumber(results.outdoor.value_ppm, 'co2')} ppm (±${displayNumber(results.outdoor.sd_ppm, 'co2')} ppm, one standard deviation) from ${results.outdoor.readings} reading${results.outdoor.readings === 1 ? '' : 's'}; ${results.outdoor.source}.`,
     },
     summary: summaryOf(doc, results, ranked.rows, judgement, SCREENING_NOTE),
+    sinceLastVisit: options.previousVisit ? sinceLastVisitSection(options.previousVisit) : null,
     ranked,
     rooms: roomSheets,
     dwellings: dwellingPages(doc, results, judgement),

@@ -94,6 +94,25 @@ function summary(w: PdfWriter, m: ReportModel): void {
   w.paragraph(m.summary.screening, { size: TYPE.small, colour: MUTED });
 }
 
+function sinceLastVisit(w: PdfWriter, m: ReportModel): void {
+  const s = m.sinceLastVisit;
+  if (!s) return;
+  w.newPage();
+  w.heading('Since the last visit');
+  w.paragraph(s.basis);
+  w.paragraph(s.rule, { size: TYPE.small, colour: MUTED });
+  w.table(
+    ['Room', 'Supply then → now', 'Steady CO2 then → now', 'Mould risk', 'Priority', 'Fixes recommended last time', 'Overall'],
+    s.rooms.map((r) => [r.room, r.supply, r.steadyCo2, r.mouldRisk, r.priority, r.fixes.join('; '), r.overall]),
+    { styles: { fontSize: TYPE.tiny, cellPadding: 2.5 }, columnStyles: { 0: { cellWidth: 70 } } },
+  );
+  if (s.notRevisited.length) {
+    w.paragraph('Rooms of the last visit not seen this time', { bold: true, after: 0 });
+    w.list(s.notRevisited, { size: TYPE.small });
+  }
+  w.table(['Overall', 'Rooms'], s.counts.map(([label, n]) => [label, String(n)]), { tableWidth: 260 });
+}
+
 function ranked(w: PdfWriter, m: ReportModel): void {
   w.newPage();
   w.heading('Rooms to fix, in order');
@@ -198,6 +217,7 @@ export async function renderReportPdf(model: ReportModel, options: PdfOptions): 
   };
   front(w, model);
   summary(w, model);
+  sinceLastVisit(w, model);
   ranked(w, model);
   await step();
   for (const sheet of model.rooms) {
