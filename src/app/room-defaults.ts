@@ -13,6 +13,7 @@ import type { BuildingUse } from '../core/building-uses.ts';
 import type { OccupantGroupRecord } from '../model/occupancy.ts';
 import type { Room } from '../model/room.ts';
 import type { Geometry } from '../model/room-geometry.ts';
+import { blankRoomParts } from '../model/room-defaults.ts';
 
 const HEIGHTS: Partial<Record<RoomUse, number>> = { classroom: 2.7, hall: 4, office: 2.6, 'meeting-room': 2.6 };
 
@@ -56,15 +57,8 @@ export function newRoom(input: { name: string; use: RoomUse; areaId?: string; ge
     clientRef: '',
     use: input.use,
     geometry: input.geometry,
-    exposedWalls: [],
-    occupants: [],
+    ...blankRoomParts(),
     schedule: { template: templateFor(input.use), periods: [] },
-    openings: [],
-    appliances: [],
-    defects: [],
-    interview: [],
-    tests: [],
-    notes: '',
     updatedAt: now.toISOString(),
   };
 }

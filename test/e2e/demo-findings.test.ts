@@ -5,7 +5,7 @@
  */
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import type { BrowserContext, Locator, Page } from 'playwright-core';
-import { openPhone } from '../support/browser.ts';
+import { openWatchedPhone } from '../support/browser.ts';
 import { axeViolations } from '../support/axe.ts';
 import { demoFile } from '../support/fixtures.ts';
 
@@ -25,13 +25,10 @@ describe.skipIf(!baseURL)('demo surveys in Chromium (phone)', () => {
   let context: BrowserContext;
   let page: Page;
   let close: () => Promise<void>;
-  const problems: string[] = [];
+  let problems: string[] = [];
 
   beforeAll(async () => {
-    ({ context, close } = await openPhone());
-    page = context.pages()[0] ?? (await context.newPage());
-    page.on('pageerror', (error) => problems.push(error.message));
-    page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
+    ({ context, page, close, problems } = await openWatchedPhone());
     await page.goto(baseURL);
   });
 

@@ -7,7 +7,7 @@
  */
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openPhone } from '../support/browser.ts';
+import { openWatchedPhone } from '../support/browser.ts';
 import { demoFile } from '../support/fixtures.ts';
 
 const baseURL = inject('baseURL');
@@ -23,12 +23,10 @@ describe.skipIf(!baseURL)('the report, offline, on a phone', () => {
   let context: BrowserContext;
   let page: Page;
   let close: () => Promise<void>;
-  const problems: string[] = [];
+  let problems: string[] = [];
 
   beforeAll(async () => {
-    ({ context, close } = await openPhone());
-    page = context.pages()[0] ?? (await context.newPage());
-    page.on('pageerror', (error) => problems.push(error.message));
+    ({ context, page, close, problems } = await openWatchedPhone());
     await page.addInitScript(() => {
       window.sharedFiles = [];
       navigator.canShare = (data?: ShareData) => !!data?.files?.length;

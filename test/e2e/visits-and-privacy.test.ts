@@ -9,7 +9,7 @@
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openPhone } from '../support/browser.ts';
+import { openWatchedPhone } from '../support/browser.ts';
 import { demoFile } from '../support/fixtures.ts';
 
 const baseURL = inject('baseURL');
@@ -20,13 +20,10 @@ describe.skipIf(!baseURL)('repeat visits, room lists and personal data (phone)',
   let context: BrowserContext;
   let page: Page;
   let close: () => Promise<void>;
-  const problems: string[] = [];
+  let problems: string[] = [];
 
   beforeAll(async () => {
-    ({ context, close } = await openPhone());
-    page = context.pages()[0] ?? (await context.newPage());
-    page.on('pageerror', (error) => problems.push(error.message));
-    page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
+    ({ context, page, close, problems } = await openWatchedPhone());
     await page.clock.install({ time: new Date('2027-09-01T09:00:00') });
     await page.goto(baseURL);
     await page.getByRole('button', { name: 'Load the demo surveys (invented data)' }).click();

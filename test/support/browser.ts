@@ -73,3 +73,16 @@ export async function expectOfflineStart(context: BrowserContext, page: Page): P
     await context.setOffline(false);
   }
 }
+
+/**
+ * A fresh phone with its first page, collecting every page error and console error into
+ * `problems`, so a test can end by asserting the page raised none.
+ */
+export async function openWatchedPhone(): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void>; problems: string[] }> {
+  const { context, close } = await openPhone();
+  const page = context.pages()[0] ?? (await context.newPage());
+  const problems: string[] = [];
+  page.on('pageerror', (error) => problems.push(error.message));
+  page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
+  return { context, page, close, problems };
+}
