@@ -7,7 +7,7 @@
  * 1 air change per hour, one reading every 2 minutes with small noise.
  */
 import { describe, it, expect, inject } from 'vitest';
-import { openPhone } from '../support/browser.ts';
+import { openWatchedPhone } from '../support/browser.ts';
 import { axeViolations } from '../support/axe.ts';
 import { demoFile } from '../support/fixtures.ts';
 
@@ -37,11 +37,7 @@ function decayCsv(): string {
 
 describe.skipIf(!baseURL)('logger file on a room (phone, offline)', () => {
   it('imports a file, accepts the decay, saves it and shows the measured supply in the findings', async () => {
-    const { context, close } = await openPhone();
-    const page = context.pages()[0] ?? (await context.newPage());
-    const problems: string[] = [];
-    page.on('pageerror', (error) => problems.push(error.message));
-    page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
+    const { context, page, close, problems } = await openWatchedPhone();
     try {
       await page.goto(baseURL);
       await page.evaluate(() => navigator.serviceWorker.ready.then(() => true));
@@ -95,11 +91,7 @@ describe.skipIf(!baseURL)('logger file on a room (phone, offline)', () => {
   });
 
   it('says why a file cannot be read, asks the date order when the file cannot tell, takes column changes and keeps an outdoor logger', async () => {
-    const { context, close } = await openPhone();
-    const page = context.pages()[0] ?? (await context.newPage());
-    const problems: string[] = [];
-    page.on('pageerror', (error) => problems.push(error.message));
-    page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
+    const { context, page, close, problems } = await openWatchedPhone();
     try {
       await page.goto(baseURL);
       await page.getByRole('button', { name: 'Load the demo surveys (invented data)' }).click();
