@@ -147,7 +147,24 @@ export interface ProfileFigures {
   highestRollingMean_ppm: Bounds;
   window_s: number;
   above: { threshold_ppm: number; time_s: Bounds; longestRun_s: Bounds }[];
+  /** The predicted day itself, for charts: only on the as-found scenario, else null. */
+  curve: ProfileCurve | null;
   warnings: AnalysisWarning[];
+}
+
+/**
+ * A predicted day sampled for drawing: every PROFILE_CURVE_STEP_S and at every change of
+ * conditions (s from midnight on the recorded clock), at the two ends of the supply's range,
+ * with the periods the room is in use. Example: a classroom template day gives about 70 times.
+ */
+export interface ProfileCurve {
+  time_s: number[];
+  /** At the high end of the supply (the lower curve), ppm. */
+  favourable_ppm: number[];
+  /** At the low end of the supply (the higher curve), ppm. */
+  unfavourable_ppm: number[];
+  /** When people are in (full or half), with the slot's label. */
+  inUse: { from_s: number; to_s: number; label: string }[];
 }
 
 /** One scenario under one weather case. */

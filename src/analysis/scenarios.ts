@@ -31,7 +31,7 @@
 import type { RoomAirflowInput } from '../core/airflow-inputs.ts';
 import { steadyLevel } from '../core/balance.ts';
 import type { AirState, OccupantGroup } from '../core/co2-generation.ts';
-import { buildDayProfile } from '../core/day-profile.ts';
+import { buildDayProfile, sampleProfileWithChanges, type DayProfile } from '../core/day-profile.ts';
 import { profileMetrics } from '../core/day-profile-metrics.ts';
 import type { FlowRange } from '../core/flow-range.ts';
 import { predictRoomSupplyOverCases, type RoomSupplyPrediction } from '../core/room-supply-prediction.ts';
@@ -39,7 +39,7 @@ import type { WeatherCases } from '../core/weather-cases.ts';
 import { analysisWarning, fromEngineWarning, uniqueWarnings, type AnalysisWarning } from './analysis-warnings.ts';
 import { scheduleIntervals, type DayPlan } from './day-schedule.ts';
 import { OUTPUT_RELATIVE_SD, type RoomOccupancy } from './occupancy-inputs.ts';
-import type { Figure, MeasuredEstimate, PredictionResult, ProfileFigures, ScenarioCase, ScenarioId, ScenarioResult } from './results.ts';
+import type { Figure, MeasuredEstimate, PredictionResult, ProfileCurve, ProfileFigures, ScenarioCase, ScenarioId, ScenarioResult } from './results.ts';
 import { summariseState, type RoomState } from './room-state.ts';
 
 /** Output at the ends of its range: ×(1 ± 1.96 × relative sd). */
@@ -146,15 +146,32 @@ function derivedFigures(supply: Figure, occupancy: RoomOccupancy, inputs: Scenar
   };
 }
 
-/** Day-profile figures at the two ends in one case. */
+/** How often a predicted day is sampled for drawing (s); changes of conditions are added. */
+export const PROFILE_CURVE_STEP_S = 600;
+
+/** The two ends' days sampled at the same times (their schedules share every change). */
+function profileCurve(plan: DayPlan, favourable: DayProfile, unfavourable: DayProfile): ProfileCurve {
+  const low = sampleProfileWithChanges(favourable, PROFILE_CURVE_STEP_S);
+  const high = sampleProfileWithChanges(unfavourable, PROFILE_CURVE_STEP_S);
+  return {
+    time_s: low.time_s,
+    favourable_ppm: low.level_ppm,
+    unfavourable_ppm: high.level_ppm,
+    inUse: plan.slots.filter((s) => s.presence === 'full' || s.presence === 'half').map((s) => ({ from_s: s.start_s, to_s: s.end_s, label: s.label })),
+  };
+}
+
+/** Day-profile figures at the two ends in one case, with the sampled day when asked. */
 function profileFor(
   plan: DayPlan,
   groups: readonly OccupantGroup[],
   ends: { occupied: Figure; empty: Figure; airing: Figure },
   weatherId: string,
   inputs: ScenarioInputs,
+  withCurve: boolean,
 ): ProfileFigures {
   const warnings: AnalysisWarning[] = [];
+  const days: DayProfile[] = [];
   const at = (end: 'low' | 'high') => {
     const pick = (f: Figure) => f[end] ?? f.value ?? 0;
     const factor = end === 'low' ? 1 + OUTPUT_RANGE : 1 - OUTPUT_RANGE;
@@ -166,6 +183,7 @@ function profileFor(
       outdoor_ppm: inputs.outdoor_ppm,
     });
     const profile = buildDayProfile({ volume_m3: inputs.volume_m3, startLevel_ppm: inputs.outdoor_ppm, air: inputs.air, schedule });
+    days.push(profile);
     const metrics = inputs.thresholds_ppm.map((threshold_ppm, k) =>
       profileMetrics(profile, { threshold_ppm, window_s: k === 0 ? inputs.window_s : Number.POSITIVE_INFINITY }),
     );
@@ -188,6 +206,8 @@ function profileFor(
       time_s: { low: best[k]!.timeAbove_s, high: worst[k]!.timeAbove_s },
       longestRun_s: { low: best[k]!.longestRunAbove_s, high: worst[k]!.longestRunAbove_s },
     })),
+    // days[0] is the low-supply (unfavourable) end, days[1] the high-supply end.
+    curve: withCurve ? profileCurve(plan, days[1]!, days[0]!) : null,
     warnings: uniqueWarnings(warnings),
   };
 }
@@ -243,8 +263,10 @@ export function roomScenarios(inputs: ScenarioInputs): { scenarios: ScenarioResu
     if (inputs.plan && occupancy.figures.count > 0) {
       const ends = { occupied: figures[worst]!, empty: supplies.get('closed')![worst]!, airing: supplies.get('windows-open')![worst]! };
       // Scenarios with the same supplies and people have the same day: work it out once.
-      const key = JSON.stringify([occupancy.figures.groups, cases[worst]!.weatherId, ends]);
-      profile = profiles.get(key) ?? profileFor(inputs.plan, occupancy.groups, ends, cases[worst]!.weatherId, inputs);
+      // Only the as-found day is drawn, so only it carries the sampled curve.
+      const withCurve = id === 'as-found';
+      const key = JSON.stringify([occupancy.figures.groups, cases[worst]!.weatherId, ends, withCurve]);
+      profile = profiles.get(key) ?? profileFor(inputs.plan, occupancy.groups, ends, cases[worst]!.weatherId, inputs, withCurve);
       profiles.set(key, profile);
     }
     const stateKey = id === 'design-occupancy' ? 'as-found' : id;

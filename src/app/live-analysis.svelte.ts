@@ -15,6 +15,7 @@ export type {
   Figure,
   MeasuredEstimate,
   Ranged,
+  ProfileCurve,
   RoomResults,
   ScenarioResult,
   AnalysisWarning,

@@ -193,3 +193,16 @@ export function sampleProfile(profile: DayProfile, step_s: number): ProfileSampl
   }
   return { time_s, level_ppm };
 }
+
+/**
+ * Sample the profile every step_s seconds from its start and at every change of conditions
+ * (each piece's start and end), so the peaks at the end of an occupied piece are drawn exactly.
+ * Times are sorted and unique. Example: a 3600 s profile of one piece from 08:00 and a second
+ * piece 09:00–09:10, step 1800 s → times 08:00, 08:30, 09:00, 09:10.
+ */
+export function sampleProfileWithChanges(profile: DayProfile, step_s: number): ProfileSamples {
+  const grid = sampleProfile(profile, step_s).time_s;
+  const changes = profile.pieces.flatMap((p) => [p.start_s, p.end_s]);
+  const time_s = [...new Set([...grid, ...changes])].sort((a, b) => a - b);
+  return { time_s, level_ppm: time_s.map((t) => levelAt(profile, t)) };
+}

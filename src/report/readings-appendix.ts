@@ -13,8 +13,9 @@ import { numberText } from './report-figure.ts';
 import type { ReportChart, RoomSheet } from './report-model.ts';
 import { recordedClock, recordedDate } from './recorded-time.ts';
 
+/** A recorded value as typed: binary noise from arithmetic (20.700000000000003) is dropped, nothing else. */
 function value(x: number | undefined, unit: string): string {
-  return x === undefined ? '—' : `${numberText(x)}${unit}`;
+  return x === undefined ? '—' : `${numberText(Number(x.toPrecision(12)))}${unit}`;
 }
 
 function conditionsWords(room: DocumentRoom, r: DocumentRoom['readings'][number]): string {

@@ -103,40 +103,74 @@ function profileLines(room: RoomResults, results: AnalysisResults): string[] {
   return lines;
 }
 
+/**
+ * The room's day: the predicted as-found day at the two ends of the supply (when the room has a
+ * schedule and people) with the periods in use shaded, and the CO2 readings. Without a predicted
+ * day, a chart of one or two readings says nothing a table row does not: the page is left to the
+ * findings.
+ */
 function dayChart(doc: SurveyDocument, room: DocumentRoom, results: AnalysisResults, result: RoomResults): ReportChart | null {
   const readings = room.readings.filter((r) => r.co2_ppm !== undefined).sort((a, b) => Date.parse(a.time) - Date.parse(b.time));
-  // A chart of one or two readings says nothing a table row does not: leave the page to the findings.
-  if (readings.length < 3) return null;
-  const day = readings[0]!.time.slice(0, 10);
+  const asFound = result.scenarios.find((s) => s.id === 'as-found')?.profile ?? null;
+  const curve = asFound?.curve ?? null;
+  if (!curve && readings.length < 3) return null;
+  const day = readings[0]?.time.slice(0, 10) ?? '';
   const times = readings.map((r) => clockSeconds(r.time, day));
   const values = readings.map((r) => r.co2_ppm!);
-  const periods = room.schedule.periods
-    .filter((p) => p.presence === 'full' || p.presence === 'half')
-    .map((p) => {
-      const [sh, sm] = p.start.split(':').map(Number);
-      const [eh, em] = p.end.split(':').map(Number);
-      const from = sh! * 3600 + sm! * 60;
-      let to = eh! * 3600 + em! * 60;
-      if (to <= from) to += 86_400;
-      return { from_s: from, to_s: to, label: p.label || `in use (${p.presence})` };
-    });
-  const steady = result.headline.steadyLevel_ppm;
   const limits = results.settings.thresholds_ppm.map((t) => ({ value: t, label: `${numberText(t)} ppm` }));
-  const steadyValue = displayNumber(steady?.value ?? null, 'co2');
-  if (steadyValue !== null) limits.push({ value: steadyValue, label: `settles at about ${numberText(steadyValue)} ppm (${BASIS_WORDS[steady!.basis]})` });
-  const t0 = Math.min(...times);
-  const t1 = Math.max(...times);
-  const pad = Math.max(1800, (t1 - t0) * 0.05);
-  const shaded = periods.filter((p) => p.to_s > t0 - pad && p.from_s < t1 + pad);
+  const series: ReportChart['series'] = [];
+  let captionStart: string;
+  let periods: ReportChart['periods'];
+  let timeRange_s: [number, number];
+  if (curve) {
+    series.push(
+      { id: 'low-supply', label: 'predicted, low end of the supply', times_s: curve.time_s, values: curve.unfavourable_ppm, style: 'line' },
+      { id: 'high-supply', label: 'predicted, high end of the supply', times_s: curve.time_s, values: curve.favourable_ppm, style: 'line' },
+    );
+    periods = curve.inUse.map((p) => ({ from_s: p.from_s, to_s: p.to_s, label: p.label || 'in use' }));
+    const weather = results.weatherCases.find((w) => w.id === asFound!.weatherId)?.label;
+    const peak = (levels: number[]) => numberText(displayNumber(Math.max(...levels), 'co2') ?? 0);
+    captionStart = `CO2 over the day as predicted from ${asFound!.schedule}${weather ? ` (${weather})` : ''}, a screening estimate: solid line at the low end of the supply (highest ${peak(curve.unfavourable_ppm)} ppm), dashed at the high end (highest ${peak(curve.favourable_ppm)} ppm); shaded: in use`;
+    const all = [...curve.time_s, ...times];
+    timeRange_s = [Math.min(...all), Math.max(...all)];
+  } else {
+    const steady = result.headline.steadyLevel_ppm;
+    const steadyValue = displayNumber(steady?.value ?? null, 'co2');
+    if (steadyValue !== null) limits.push({ value: steadyValue, label: `settles at about ${numberText(steadyValue)} ppm (${BASIS_WORDS[steady!.basis]})` });
+    const t0 = Math.min(...times);
+    const t1 = Math.max(...times);
+    const pad = Math.max(1800, (t1 - t0) * 0.05);
+    timeRange_s = [t0 - pad, t1 + pad];
+    periods = room.schedule.periods
+      .filter((p) => p.presence === 'full' || p.presence === 'half')
+      .map((p) => {
+        const [sh, sm] = p.start.split(':').map(Number);
+        const [eh, em] = p.end.split(':').map(Number);
+        const from = sh! * 3600 + sm! * 60;
+        let to = eh! * 3600 + em! * 60;
+        if (to <= from) to += 86_400;
+        return { from_s: from, to_s: to, label: p.label || `in use (${p.presence})` };
+      })
+      .filter((p) => p.to_s > timeRange_s[0] && p.from_s < timeRange_s[1]);
+    captionStart = `${readings.length} CO2 readings from ${recordedClock(readings[0]!.time)} to ${recordedClock(readings.at(-1)!.time)}${periods.length ? '; shaded: the room’s scheduled use' : ''}`;
+  }
+  if (readings.length > 0) {
+    series.push({ id: 'readings', label: 'CO2 read in the room', times_s: times, values, style: !curve && readings.length > 12 ? 'line' : 'points' });
+  }
+  const readWords = curve
+    ? readings.length > 0
+      ? `; ${readings.length} CO2 reading${readings.length === 1 ? '' : 's'} from ${recordedClock(readings[0]!.time)} to ${recordedClock(readings.at(-1)!.time)} as points`
+      : '; no CO2 readings taken'
+    : '';
   return {
-    title: `CO2 readings on ${recordedDate(day)}`,
+    title: curve ? `The day in this room: CO2 predicted${readings.length > 0 ? ` and read on ${recordedDate(day)}` : ''}` : `CO2 readings on ${recordedDate(day)}`,
     yLabel: 'CO2 (ppm)',
-    series: [{ id: 'readings', label: 'CO2 read in the room', times_s: times, values, style: readings.length > 12 ? 'line' : 'points' }],
+    series,
     limits,
-    periods: shaded,
-    timeRange_s: [t0 - pad, t1 + pad],
+    periods,
+    timeRange_s,
     yInclude: [results.outdoor.value_ppm],
-    caption: `${readings.length} CO2 reading${readings.length === 1 ? '' : 's'} from ${recordedClock(readings[0]!.time)} to ${recordedClock(readings.at(-1)!.time)}; dashed lines at ${limits.map((l) => l.label).join(', ')}${shaded.length ? '; shaded: the room’s scheduled use' : ''}.`,
+    caption: `${captionStart}${readWords}; dashed lines at ${limits.map((l) => l.label).join(', ')}.`,
   };
 }
 

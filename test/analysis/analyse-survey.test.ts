@@ -21,6 +21,7 @@ import { CURRENT_FORMAT_VERSION } from '../../src/model/migrations.ts';
 import type { SurveyDocument } from '../../src/model/survey-document.ts';
 import { surveyDocumentSchema } from '../../src/model/survey-document.ts';
 import { demoFile } from '../support/fixtures.ts';
+import { approxEqual } from '../support/approx-equal.ts';
 import { surveyDocument } from '../support/survey-arbitraries.ts';
 
 const DRAWS = 200;
@@ -43,6 +44,32 @@ describe('analyseSurvey on the demo file', () => {
       }
       expect(r.areas.map((a) => a.areaId)).toEqual(doc.areas.map((a) => a.id));
     }
+  });
+
+  it('samples the as-found day for drawing, its highest points being the peak figures at the two ends', () => {
+    let drawn = 0;
+    for (const r of results) {
+      for (const room of r.rooms) {
+        const [asFound, ...others] = room.scenarios;
+        for (const s of others) expect(s.profile?.curve ?? null).toBeNull();
+        const profile = asFound!.profile;
+        if (!profile) continue;
+        const curve = profile.curve!;
+        drawn++;
+        expect(curve.favourable_ppm).toHaveLength(curve.time_s.length);
+        expect(curve.unfavourable_ppm).toHaveLength(curve.time_s.length);
+        curve.time_s.forEach((t, i) => {
+          if (i > 0) expect(t).toBeGreaterThan(curve.time_s[i - 1]!);
+          expect(curve.unfavourable_ppm[i]!).toBeGreaterThanOrEqual(curve.favourable_ppm[i]! - 1e-9);
+        });
+        // Levels only rise or fall between changes of conditions, and every change is sampled,
+        // so the drawn maxima are the peaks the metrics report (internal consistency).
+        if (profile.peak_ppm.high !== null) approxEqual(Math.max(...curve.unfavourable_ppm), profile.peak_ppm.high, { rel: 1e-9 });
+        if (profile.peak_ppm.low !== null) approxEqual(Math.max(...curve.favourable_ppm), profile.peak_ppm.low, { rel: 1e-9 });
+        expect(curve.inUse.length).toBeGreaterThan(0);
+      }
+    }
+    expect(drawn).toBeGreaterThan(3);
   });
 
   it('stamps the engine, format, analysis and criteria versions', () => {

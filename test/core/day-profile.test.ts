@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { approxEqual } from '../support/approx-equal.ts';
 import { odexLevels } from '../support/odex-day-profile.ts';
-import { buildDayProfile, levelAt, levelIntegralTo, sampleProfile, type DayProfileInput } from '../../src/core/day-profile.ts';
+import { buildDayProfile, levelAt, levelIntegralTo, sampleProfile, sampleProfileWithChanges, type DayProfileInput } from '../../src/core/day-profile.ts';
 import { AIR, busyDay, CLASS } from '../support/invented-days.ts';
 
 describe('day profile against odex (reference ODE solver)', () => {
@@ -18,6 +18,22 @@ describe('day profile against odex (reference ODE solver)', () => {
     });
     expect(largest).toBeLessThan(0.01);
     expect(profile.warnings).toEqual([]);
+  });
+
+  it('samples every change of conditions as well as the grid, and agrees with odex there', () => {
+    const profile = buildDayProfile(busyDay());
+    const ours = sampleProfileWithChanges(profile, 600);
+    const changes = profile.pieces.flatMap((p) => [p.start_s, p.end_s]);
+    for (const t of changes) expect(ours.time_s).toContain(t);
+    expect(ours.time_s).toEqual([...ours.time_s].sort((a, b) => a - b));
+    expect(new Set(ours.time_s).size).toBe(ours.time_s.length);
+    // Every change in the invented day falls on a whole minute, so the 60 s odex grid holds them all.
+    const reference = odexLevels(profile, 60);
+    ours.time_s.forEach((t, i) => {
+      const k = reference.time_s.indexOf(t);
+      expect(k).toBeGreaterThanOrEqual(0);
+      approxEqual(ours.level_ppm[i]!, reference.level_ppm[k]!, { abs: 0.01 });
+    });
   });
 });
 

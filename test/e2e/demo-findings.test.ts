@@ -56,6 +56,12 @@ describe.skipIf(!baseURL)('demo surveys in Chromium (phone)', () => {
         await page.getByTestId('headline').waitFor({ timeout: 30_000 });
         await expect(page.getByTestId('headline').innerText()).resolves.toMatch(/Outdoor air: .*\d.*(L\/s)/);
         if (i === 0) {
+          // The predicted day with its two ends, the readings and the periods in use (rooms used by day).
+          const day = page.getByRole('figure', { name: 'The day in this room, predicted, with the readings' });
+          await day.waitFor();
+          await expect(day.locator('path.line').count()).resolves.toBeGreaterThanOrEqual(2);
+          await expect(day.locator('.summary').innerText()).resolves.toMatch(/^Predicted CO₂ over the day from .+: highest [\d,]+–[\d,]+ ppm/);
+          await day.screenshot({ path: `test-results/walk/day-chart-${demo.surveys.indexOf(doc)}.png` });
           expect(await axeViolations(page)).toEqual([]);
           await page.getByRole('link', { name: `← Back to ${room.name}` }).click();
           await page.getByRole('heading', { name: room.name, exact: true }).waitFor();

@@ -85,7 +85,10 @@ describe('the PDF report of the demo school', () => {
     const { pages } = await report(docs()[0]!);
     const all = flat(pages.join('\n'));
     expect(all).toContain('Appendix: logger records');
-    expect(all).toContain('CO2 readings on 14 January 2026');
+    expect(all).toContain('The day in this room: CO2 predicted and read on 14 January 2026');
+    expect(all).toMatch(/CO2 over the day as predicted from the room’s recorded periods \(.+\), a screening estimate: solid line at the low end of the supply \(highest [\d,]+ ppm\)/);
+    // Recorded values print as typed, without binary noise from arithmetic.
+    expect(all).not.toMatch(/\d\.\d{6,}/);
     expect(all).toMatch(/shaded: the periods accepted for analysis \(build-up/);
   });
 

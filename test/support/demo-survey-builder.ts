@@ -45,7 +45,8 @@ const id = idMaker();
 const random = seeded(20260114);
 /** Meter noise: uniform ± half-width, ppm or °C or %. */
 const jitter = (halfWidth: number) => (random() * 2 - 1) * halfWidth;
-const round = (x: number, step: number) => Math.round(x / step) * step;
+/** Round to a step, dropping the binary noise of the division (20.700000000000003 → 20.7). */
+const round = (x: number, step: number) => Number((Math.round(x / step) * step).toPrecision(12));
 const at = (day: string, hhmm: string) => `${day}T${hhmm}:00Z`;
 const addMinutes = (iso: string, minutes: number) => new Date(Date.parse(iso) + minutes * 60_000).toISOString().replace('.000Z', 'Z');
 const ROOM_AIR = { temp_C: 20, pressure_Pa: STANDARD_PRESSURE_PA };
