@@ -61,6 +61,9 @@ export default defineConfig({
           include: ['**/*.test.ts'],
           exclude: ['e2e/**', '**/node_modules/**'],
           environment: 'node',
+          // Whole-file work (every demo PDF, fuzzed imports) takes seconds on a busy 2-core
+          // machine; speed is measured by `npm run bench`, so the limit only catches a hang.
+          testTimeout: 30_000,
         },
       },
       {
