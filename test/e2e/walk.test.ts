@@ -144,6 +144,9 @@ describe.skipIf(!baseURL)('the walk in Chromium (phone)', () => {
     const fit = page.getByTestId('running-fit');
     await fit.waitFor({ timeout: 30_000 });
     await expect(fit.innerText()).resolves.toMatch(/^Outdoor air: [\d.]+ L\/s \([\d.]+–[\d.]+ L\/s\); [\d.]+ h⁻¹/);
+    // The fit catches up with the last reading and says so.
+    await page.getByText(/from 5 of 5 readings; 95% interval/).waitFor({ timeout: 30_000 });
+    await expect(page.getByText('Updating with the latest reading…').count()).resolves.toBe(0);
     await page.getByTestId('ten-more').waitFor({ timeout: 30_000 });
     await shot('decay');
   });
