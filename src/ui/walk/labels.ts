@@ -66,3 +66,6 @@ export const WALL_CONSTRUCTION = options({
   'curtain-wall': 'Glazed curtain wall',
   other: 'Other',
 });
+
+/** When an outdoor reading was taken. */
+export const OUTDOOR_MOMENTS = options({ start: 'Start of visit', end: 'End of visit', during: 'During' });
