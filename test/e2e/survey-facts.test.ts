@@ -35,6 +35,12 @@ describe.skipIf(!baseURL)('survey facts in Chromium (phone)', () => {
     return page.locator('main').innerText();
   }
   const shot = (name: string) => page.screenshot({ path: `${shots}${name}.png`, fullPage: true });
+  /** Open a folded part of the details screen (whatever state an earlier test left it in). */
+  async function openPart(name: string): Promise<void> {
+    const toggle = page.getByRole('button', { name });
+    if ((await toggle.getAttribute('aria-expanded')) !== 'true') await toggle.click();
+    await expect(toggle.getAttribute('aria-expanded')).resolves.toBe('true');
+  }
   const focused = (page: Page) => page.evaluate(() => document.activeElement?.id ?? '');
 
   beforeAll(async () => {
@@ -84,7 +90,7 @@ describe.skipIf(!baseURL)('survey facts in Chromium (phone)', () => {
     const before = await shut();
     expect(before).toMatch(/L\/s/);
     await page.goto(at('/details'));
-    await page.getByRole('button', { name: 'The building' }).click();
+    await openPart('The building');
     await page.getByRole('radio', { name: /^Some shelter/ }).focus();
     await page.keyboard.press('ArrowUp'); // radio groups move by arrow keys: up from "some shelter" is "exposed"
     await expect(page.getByRole('radio', { name: /^Exposed/ }).isChecked()).resolves.toBe(true);
@@ -95,7 +101,7 @@ describe.skipIf(!baseURL)('survey facts in Chromium (phone)', () => {
     // Stored, not only shown: a fresh load has it.
     await page.goto(at('/details'));
     await page.reload();
-    await page.getByRole('button', { name: 'The building' }).click();
+    await openPart('The building');
     await expect(page.getByRole('radio', { name: /^Exposed/ }).isChecked()).resolves.toBe(true);
   });
 
@@ -104,6 +110,7 @@ describe.skipIf(!baseURL)('survey facts in Chromium (phone)', () => {
     const toggle = page.getByRole('button', { name: 'About the survey' });
     await tabTo(page, toggle);
     await page.keyboard.press('Space');
+    await expect(toggle.getAttribute('aria-expanded')).resolves.toBe('true');
     await expect(page.getByLabel('Surveyor 1: name').inputValue()).resolves.toBe(school.survey.surveyors[0]!.name);
     await tabTo(page, page.getByLabel('Name of a surveyor to add'));
     await page.keyboard.type('Second Surveyor (invented)');
@@ -123,7 +130,7 @@ describe.skipIf(!baseURL)('survey facts in Chromium (phone)', () => {
     await page.getByTestId('about-save-status').getByText(/Saved on this device/).waitFor();
 
     await page.reload();
-    await page.getByRole('button', { name: 'About the survey' }).click();
+    await openPart('About the survey');
     await expect(page.getByLabel('Surveyor 1: qualifications').inputValue()).resolves.toBe('Ventilation inspector (invented)');
     await expect(page.getByLabel('Surveyor 2: name').count()).resolves.toBe(0);
     await expect(page.getByLabel('Scope').inputValue()).resolves.toMatch(/Roof void not entered\.$/);
@@ -131,8 +138,8 @@ describe.skipIf(!baseURL)('survey facts in Chromium (phone)', () => {
 
   it('has no WCAG 2 A/AA violation on the details screen with both parts open, and fits 360 px and landscape', async () => {
     await page.goto(at('/details'));
-    await page.getByRole('button', { name: 'The building' }).click();
-    await page.getByRole('button', { name: 'About the survey' }).click();
+    await openPart('The building');
+    await openPart('About the survey');
     expect(await axeViolations(page)).toEqual([]);
     await shot('details-open');
     for (const size of [{ width: 360, height: 740 }, { width: 844, height: 390 }]) {
