@@ -13,6 +13,7 @@ import { getSurvey } from '../store/surveys.ts';
 import { knowHeader, updateSurveyHeader } from './update-survey-header.ts';
 import { connection } from './storage-connection.ts';
 import { Autosave } from './autosave.svelte.ts';
+import { surveyWalk } from './survey-walk.svelte.ts';
 
 class SurveyDetails {
   /** The survey as last loaded or saved. */
@@ -26,6 +27,8 @@ class SurveyDetails {
     save: async (survey) => {
       const { title, site, client, buildingUse, ventilation, stage } = survey;
       this.survey = await updateSurveyHeader(survey.id, { title, site, client, buildingUse, ventilation, stage }, new Date(survey.updatedAt));
+      // The walk's copy of the header and its findings follow (building use and ventilation feed the analysis).
+      await surveyWalk.headerSavedElsewhere(survey.id);
     },
   });
 

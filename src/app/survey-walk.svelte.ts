@@ -108,6 +108,13 @@ class SurveyWalk {
     }
   }
 
+  /** Another screen saved the header of the open survey: read it again and analyse afresh. */
+  async headerSavedElsewhere(surveyId: string): Promise<void> {
+    if (this.doc?.survey.id !== surveyId) return;
+    await this.reloadHeader();
+    this.analyse();
+  }
+
   room(roomId: string | null): DocumentRoom | undefined {
     return this.doc?.rooms.find((r) => r.id === roomId);
   }

@@ -4,22 +4,14 @@
  * work from the keyboard alone (Tab to them, then Enter or Space), and the page logs no error.
  */
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
-import type { BrowserContext, Locator, Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { openWatchedPhone } from '../support/browser.ts';
 import { axeViolations } from '../support/axe.ts';
 import { demoFile } from '../support/fixtures.ts';
+import { tabTo } from '../support/keyboard.ts';
 
 const baseURL = inject('baseURL');
 const demo = demoFile();
-
-/** Press Tab until `target` has the focus (at most `limit` times); fails if it never does. */
-async function tabTo(page: Page, target: Locator, limit = 200): Promise<void> {
-  for (let i = 0; i < limit; i += 1) {
-    await page.keyboard.press('Tab');
-    if (await target.evaluate((el) => el === document.activeElement)) return;
-  }
-  throw new Error(`Tab never reached ${target.toString()}`);
-}
 
 describe.skipIf(!baseURL)('demo surveys in Chromium (phone)', () => {
   let context: BrowserContext;

@@ -33,28 +33,8 @@ export function openingName(o: Opening): string {
   return o.count > 1 ? `${o.count} × ${what}` : what;
 }
 
-export const QUANTITY_WORDS: Record<import('../../model/instrument.ts').MeasuredQuantity, string> = {
-  co2: 'CO₂',
-  temperature: 'Temperature',
-  'relative-humidity': 'Relative humidity',
-  'surface-temperature': 'Surface temperature',
-  airflow: 'Airflow (fan flow)',
-  'air-speed': 'Air speed',
-  pressure: 'Pressure',
-  'moisture-content': 'Moisture content',
-};
-
-/** Units of each quantity as stored (offsets of side-by-side checks are in these). */
-export const QUANTITY_UNITS: Record<import('../../model/instrument.ts').MeasuredQuantity, string> = {
-  co2: 'ppm',
-  temperature: '°C',
-  'relative-humidity': '%',
-  'surface-temperature': '°C',
-  airflow: 'm³/s',
-  'air-speed': 'm/s',
-  pressure: 'Pa',
-  'moisture-content': '%',
-};
+/** Words and stored units of measured quantities (defined in src/app, shared with the instrument form's rules). */
+export { QUANTITY_UNITS, QUANTITY_WORDS } from '../../app/quantity-words.ts';
 
 export const APPLIANCE_KIND = options({ ...APPLIANCE_LABELS, other: 'Other' });
 export const FLUE = options({ 'room-sealed': 'Room-sealed', 'open-flued': 'Open-flued', flueless: 'Flueless', 'not-known': 'Not known' });
@@ -86,3 +66,6 @@ export const WALL_CONSTRUCTION = options({
   'curtain-wall': 'Glazed curtain wall',
   other: 'Other',
 });
+
+/** When an outdoor reading was taken. */
+export const OUTDOOR_MOMENTS = options({ start: 'Start of visit', end: 'End of visit', during: 'During' });
