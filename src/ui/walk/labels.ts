@@ -22,8 +22,8 @@ export const DWELLING_SYSTEM = options({
   none: 'None',
   'intermittent-extract': 'Intermittent extract fans',
   'continuous-extract': 'Continuous extract',
-  'heat-recovery': 'Heat recovery (supply and extract)',
-  'positive-input': 'Positive input (supply only)',
+  'heat-recovery': 'Heat recovery',
+  'positive-input': 'Positive input',
   other: 'Other',
 });
 export const TERMINAL_SETTING = options({ normal: 'Normal', boost: 'Boost', other: 'Other' });
