@@ -2,11 +2,14 @@
  * The open survey on site: its whole document (header, instruments, areas, rooms with their
  * readings), the photos' descriptions, and the live findings. Screens edit the document in
  * place and say what changed; each change is checked with the model's schema and autosaved —
- * the header through a patch applied to the stored header, each room through its own autosave,
- * readings, instruments, areas and photos as single records — and once a save has landed the
- * analysis is asked to run again (on the survey as stored).
+ * the header through a patch applied to the stored header, each room and each area edited on its
+ * screen through its own autosave, readings, instruments, new areas and photos as single
+ * records — and once a save has landed the analysis is asked to run again (on the survey as
+ * stored). Removing an area moves its rooms to the area it sat in (area-removal.ts).
  */
 import type { Area } from '../model/area.ts';
+import { areaRemovalPlan, movedTo } from '../model/area-removal.ts';
+import { withoutTerminalRoom } from '../model/terminal-room-removal.ts';
 import type { Instrument } from '../model/instrument.ts';
 import type { LoggerSeries } from '../model/logger-series.ts';
 import type { Photo } from '../model/photo.ts';
@@ -19,10 +22,11 @@ import { duplicateRoom } from '../store/duplicate-room.ts';
 import { loadSurvey } from '../store/load-survey.ts';
 import { getPhotoBytes, listPhotos } from '../store/photos.ts';
 import { reorderRooms } from '../store/reorder-rooms.ts';
-import { deleteReading, deleteRoom } from '../store/remove-parts.ts';
+import { deleteArea, deleteReading, deleteRoom } from '../store/remove-parts.ts';
 import { getSurvey } from '../store/surveys.ts';
 import { saveArea, saveInstrument, saveReading, saveRoom, saveSeries } from '../store/survey-parts.ts';
 import { addPhoto, type PhotoPlace } from './add-photo.ts';
+import { checkArea } from './area-problems.ts';
 import { Autosave } from './autosave.svelte.ts';
 import { LiveAnalysis } from './live-analysis.svelte.ts';
 import { connection } from './storage-connection.ts';
@@ -37,9 +41,12 @@ class SurveyWalk {
   /** Problems with the header as edited, and with each room, by room id. */
   headerProblems = $state<ValidationProblem[]>([]);
   roomProblems = $state<Record<string, ValidationProblem[]>>({});
+  /** Problems with each area as edited on its screen, by area id. */
+  areaProblems = $state<Record<string, ValidationProblem[]>>({});
   readonly analysis = new LiveAnalysis();
   private patch: SurveyPatch = {};
   private readonly roomSaves = new Map<string, Autosave<Room>>();
+  private readonly areaSaves = new Map<string, Autosave<Area>>();
   readonly header = new Autosave<SurveyPatch>({
     form: 'survey header',
     save: async (patch) => {
@@ -95,7 +102,8 @@ class SurveyWalk {
   }
 
   async flushAll(): Promise<void> {
-    await Promise.all([this.header.flush(), ...[...this.roomSaves.values()].map((save) => save.flush())]);
+    const saves = [...this.roomSaves.values(), ...this.areaSaves.values()];
+    await Promise.all([this.header.flush(), ...saves.map((save) => save.flush())]);
   }
 
   /** Read the stored header again (another screen changed it), unless edits here are waiting. */
@@ -136,18 +144,7 @@ class SurveyWalk {
 
   /** The autosave of one room (its own, so edits to two rooms never replace each other). */
   roomSave(roomId: string): Autosave<Room> {
-    let save = this.roomSaves.get(roomId);
-    if (!save) {
-      save = new Autosave<Room>({
-        form: `room ${roomId}`,
-        save: async (room) => {
-          await saveRoom(connection, this.doc!.survey.id, room);
-          this.analyse();
-        },
-      });
-      this.roomSaves.set(roomId, save);
-    }
-    return save;
+    return this.recordSave(this.roomSaves, roomId, `room ${roomId}`, (room) => saveRoom(connection, this.doc!.survey.id, room));
   }
 
   /** A room was edited in place: check it, then save it once typing pauses. */
@@ -165,6 +162,53 @@ class SurveyWalk {
     }
     this.roomProblems[roomId] = [];
     this.roomSave(roomId).edit(parsed.data);
+  }
+
+  area(areaId: string | null): Area | undefined {
+    return this.doc?.areas.find((a) => a.id === areaId);
+  }
+
+  /** The autosave of one area edited on its screen. */
+  areaSave(areaId: string): Autosave<Area> {
+    return this.recordSave(this.areaSaves, areaId, `area ${areaId}`, (area) => saveArea(connection, this.doc!.survey.id, area, new Date().toISOString()));
+  }
+
+  /** An area was edited in place: check it (problems name the field), then save it once typing pauses. */
+  areaChanged(areaId: string): void {
+    const area = this.area(areaId);
+    if (!area) return;
+    const checked = checkArea($state.snapshot(area) as Area);
+    if (!checked.ok) {
+      this.areaProblems[areaId] = checked.problems;
+      this.areaSave(areaId).refuse(checked.problems.map((p) => p.message).join('; '));
+      return;
+    }
+    this.areaProblems[areaId] = [];
+    this.areaSave(areaId).edit(checked.area);
+  }
+
+  /**
+   * Remove an area: its rooms and the areas inside it move to the area it sat in (or to no
+   * area), its dwelling facts and system go with it. Pending edits are saved first.
+   */
+  async removeArea(areaId: string, now = new Date()): Promise<void> {
+    await this.flushAll();
+    await deleteArea(connection, this.doc!.survey.id, areaId, now.toISOString());
+    const doc = this.doc!;
+    const plan = areaRemovalPlan(doc.areas, doc.rooms, areaId);
+    this.areaSaves.get(areaId)?.closeForm();
+    this.areaSaves.delete(areaId);
+    delete this.areaProblems[areaId];
+    if (plan) {
+      doc.areas = doc.areas.filter((a) => a.id !== areaId).map((a) => (plan.areaIds.includes(a.id) ? movedTo(a, 'parentId', plan.parentId) : a));
+      for (const room of doc.rooms) {
+        if (!plan.roomIds.includes(room.id)) continue;
+        if (plan.parentId === undefined) delete room.areaId;
+        else room.areaId = plan.parentId;
+        room.updatedAt = now.toISOString();
+      }
+    }
+    this.analyse();
   }
 
   /** Save a new room (already complete and valid) last in the survey. */
@@ -199,10 +243,15 @@ class SurveyWalk {
     rooms.splice(to, 0, room!);
   }
 
-  /** Remove a room entered by mistake, with its readings, photos and logger series. */
+  /**
+   * Remove a room entered by mistake, with its readings, photos and logger series; a terminal
+   * that served it keeps the room's name as its location.
+   */
   async removeRoom(roomId: string, now = new Date()): Promise<void> {
-    await this.roomSave(roomId).flush();
+    await this.flushAll();
+    const room = this.room(roomId);
     await deleteRoom(connection, this.doc!.survey.id, roomId, now.toISOString());
+    if (room) this.doc!.areas = this.doc!.areas.map((a) => withoutTerminalRoom(a, room));
     this.doc!.rooms = this.doc!.rooms.filter((r) => r.id !== roomId);
     this.photos = this.photos.filter((p) => p.roomId !== roomId);
     this.analyse();
@@ -258,6 +307,22 @@ class SurveyWalk {
   async photoUrl(photoId: string): Promise<string | undefined> {
     const bytes = await getPhotoBytes(connection, photoId);
     return bytes && URL.createObjectURL(new Blob([bytes], { type: 'image/jpeg' }));
+  }
+
+  /** The autosave of one record, made on first use: `write` stores it, then the findings follow. */
+  private recordSave<T>(saves: Map<string, Autosave<T>>, id: string, form: string, write: (value: T) => Promise<unknown>): Autosave<T> {
+    let save = saves.get(id);
+    if (!save) {
+      save = new Autosave<T>({
+        form,
+        save: async (value) => {
+          await write(value);
+          this.analyse();
+        },
+      });
+      saves.set(id, save);
+    }
+    return save;
   }
 
   /** Stored data changed: the findings follow. */

@@ -57,3 +57,6 @@ export const areaSchema = z.strictObject({
 });
 
 export type Area = z.infer<typeof areaSchema>;
+export type Dwelling = z.infer<typeof dwellingSchema>;
+export type DwellingSystem = z.infer<typeof dwellingSystemSchema>;
+export type Terminal = z.infer<typeof terminalSchema>;

@@ -1,11 +1,14 @@
 /**
- * Removing what was entered by mistake: a room (with its readings, photos and logger series) or
- * one reading (taken out of any test that grouped it; a test left with fewer than two readings
- * goes too). One transaction each, strict durability, saved only after `tx.done`; like any edit,
+ * Removing what was entered by mistake: a room (with its readings, photos and logger series; a
+ * whole-dwelling terminal that served it keeps its place as a location), one reading (taken out
+ * of any test that grouped it; a test left with fewer than two readings goes too), or an area
+ * (its rooms and inner areas move to the area it sat in, or to no area: area-removal.ts). One transaction each, strict durability, saved only after `tx.done`; like any edit,
  * it moves an issued revision on to the next and the survey's last change to `changedAt`.
  */
 import type { IDBPTransaction } from 'idb';
+import { areaRemovalPlan, movedTo } from '../model/area-removal.ts';
 import { editableRevision } from '../model/revision-lock.ts';
+import { withoutTerminalRoom } from '../model/terminal-room-removal.ts';
 import type { Connection } from './connection.ts';
 import { StorageError } from './connection.ts';
 import { ofSurvey, type SurveyPartStore, type VentwalkDB } from './schema.ts';
@@ -37,9 +40,9 @@ async function removeIn(
   });
 }
 
-/** Delete a room of a survey with its readings, photos and logger series. */
+/** Delete a room of a survey with its readings, photos and logger series; terminals that served it keep its name as their location. */
 export async function deleteRoom(connection: Connection, surveyId: string, roomId: string, changedAt: string): Promise<void> {
-  await removeIn(connection, ['rooms', 'readings', 'photos', 'series'], surveyId, changedAt, async (tx) => {
+  await removeIn(connection, ['rooms', 'readings', 'photos', 'series', 'areas'], surveyId, changedAt, async (tx) => {
     const room = await tx.objectStore('rooms').get(roomId);
     if (room?.surveyId !== surveyId) return 'This room is not in the survey';
     queue(tx.objectStore('rooms').delete(roomId));
@@ -47,6 +50,29 @@ export async function deleteRoom(connection: Connection, surveyId: string, roomI
       const records = await tx.objectStore(store).index('bySurvey').getAll(ofSurvey(surveyId));
       for (const r of records) if ((r as { roomId?: string }).roomId === roomId) queue(tx.objectStore(store).delete(r.id));
     }
+    for (const area of await tx.objectStore('areas').index('bySurvey').getAll(ofSurvey(surveyId))) {
+      const kept = withoutTerminalRoom(area, room);
+      if (kept !== area) queue(tx.objectStore('areas').put(kept));
+    }
+    return undefined;
+  });
+}
+
+/**
+ * Delete an area of a survey: its rooms and the areas inside it move to the area it sat in (or
+ * to no area), its dwelling facts and system go with it (area-removal.ts).
+ */
+export async function deleteArea(connection: Connection, surveyId: string, areaId: string, changedAt: string): Promise<void> {
+  await removeIn(connection, ['areas', 'rooms'], surveyId, changedAt, async (tx) => {
+    const areas = await tx.objectStore('areas').index('bySurvey').getAll(ofSurvey(surveyId));
+    const rooms = await tx.objectStore('rooms').index('bySurvey').getAll(ofSurvey(surveyId));
+    const plan = areaRemovalPlan(areas, rooms, areaId);
+    if (!plan) return 'This area is not in the survey';
+    queue(tx.objectStore('areas').delete(areaId));
+    for (const room of rooms) {
+      if (plan.roomIds.includes(room.id)) queue(tx.objectStore('rooms').put({ ...movedTo(room, 'areaId', plan.parentId), updatedAt: changedAt }));
+    }
+    for (const area of areas) if (plan.areaIds.includes(area.id)) queue(tx.objectStore('areas').put(movedTo(area, 'parentId', plan.parentId)));
     return undefined;
   });
 }

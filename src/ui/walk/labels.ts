@@ -17,6 +17,16 @@ export const FAN_DIRECTION = options({ extract: 'Extract', supply: 'Supply' });
 export const ISOLATOR = options({ on: 'On', off: 'Off', none: 'None fitted', 'not-found': 'Not found' });
 export const DUCTING = options({ ducted: 'Ducted outside', recirculating: 'Recirculating', 'through-wall': 'Through the wall' });
 export const SEX = options({ mixed: 'Mixed', female: 'Female', male: 'Male' });
+export const AREA_KIND = options({ block: 'Block', floor: 'Floor', flat: 'Flat', house: 'House', wing: 'Wing', other: 'Other' });
+export const DWELLING_SYSTEM = options({
+  none: 'None',
+  'intermittent-extract': 'Intermittent extract fans',
+  'continuous-extract': 'Continuous extract',
+  'heat-recovery': 'Heat recovery',
+  'positive-input': 'Positive input',
+  other: 'Other',
+});
+export const TERMINAL_SETTING = options({ normal: 'Normal', boost: 'Boost', other: 'Other' });
 export const FACING = options({ N: 'N', NE: 'NE', E: 'E', SE: 'SE', S: 'S', SW: 'SW', W: 'W', NW: 'NW' });
 
 
