@@ -1,5 +1,5 @@
 /**
- * The survey and room that were open, remembered durably so a cold start — iOS restarts
+ * The survey and room (or area) that were open, remembered durably so a cold start — iOS restarts
  * installed apps at their start URL after killing them in the background — reopens there.
  * Leaving for the survey list forgets it.
  */
@@ -16,21 +16,22 @@ export async function rememberOpen(open: LastOpen | undefined): Promise<void> {
 /** Keep the remembered place current as the surveyor moves about. */
 export function trackOpen(): void {
   let last = '';
-  const remember = ({ surveyId, roomId }: { surveyId: string | null; roomId: string | null }) => {
-    const key = `${surveyId}/${roomId}`;
+  const remember = ({ surveyId, roomId, areaId }: { surveyId: string | null; roomId: string | null; areaId: string | null }) => {
+    const key = `${surveyId}/${roomId}/${areaId}`;
     if (key === last) return;
     last = key;
-    void rememberOpen(surveyId ? { surveyId, ...(roomId ? { roomId } : {}) } : undefined);
+    void rememberOpen(surveyId ? { surveyId, ...(roomId ? { roomId } : areaId ? { areaId } : {}) } : undefined);
   };
   remember(navigation);
   navigation.onChange(remember);
 }
 
-/** On a bare cold start, go back to the survey (and room) that was open, if still on the device. */
+/** On a bare cold start, go back to the survey (and room or area) that was open, if still on the device. */
 export async function reopenLast(): Promise<void> {
   if (!navigation.startedBare) return;
   const last = await readMeta(connection, 'lastOpen').catch(() => undefined);
   if (!last || !(await getSurvey(connection, last.surveyId).catch(() => undefined))) return;
   if (navigation.screen !== 'surveys') return;
-  navigation.go(last.roomId ? { screen: 'room', surveyId: last.surveyId, roomId: last.roomId } : { screen: 'overview', surveyId: last.surveyId });
+  const { surveyId, roomId, areaId } = last;
+  navigation.go(roomId ? { screen: 'room', surveyId, roomId } : areaId ? { screen: 'area', surveyId, areaId } : { screen: 'overview', surveyId });
 }

@@ -1,6 +1,6 @@
 /**
  * Small facts the app keeps about itself in the meta store: when the last backup was made,
- * which survey and room were open (so a cold start reopens there), and how long surveys are kept. Each is checked on reading,
+ * which survey and room (or area) were open (so a cold start reopens there), and how long surveys are kept. Each is checked on reading,
  * so a damaged entry reads as "not known" instead of breaking the app.
  */
 import type { Connection } from './connection.ts';
@@ -9,6 +9,7 @@ import { commitNow, queue } from './write-requests.ts';
 export interface LastOpen {
   surveyId: string;
   roomId?: string;
+  areaId?: string;
 }
 
 export interface MetaFacts {
@@ -25,7 +26,8 @@ const CHECKS: { [K in keyof MetaFacts]: (value: unknown) => value is MetaFacts[K
     typeof value === 'object' &&
     value !== null &&
     typeof (value as LastOpen).surveyId === 'string' &&
-    ['string', 'undefined'].includes(typeof (value as LastOpen).roomId),
+    ['string', 'undefined'].includes(typeof (value as LastOpen).roomId) &&
+    ['string', 'undefined'].includes(typeof (value as LastOpen).areaId),
   retentionMonths: (value): value is number => Number.isInteger(value) && (value as number) >= 1 && (value as number) <= 120,
 };
 

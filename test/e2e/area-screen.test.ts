@@ -155,6 +155,13 @@ describe.skipIf(!baseURL)('the area screen in Chromium (phone)', () => {
     await findings().getByText('ADF whole-dwelling ventilation rate, 2 bedrooms', { exact: true }).waitFor({ timeout: 30_000 });
   });
 
+  it('reopens on the flat after a cold start at the start address', async () => {
+    const here = page.url();
+    await page.goto(baseURL);
+    await page.getByRole('heading', { name: 'Flat 12', level: 1 }).waitFor();
+    expect(page.url()).toBe(here);
+  });
+
   it('removes the flat: the screen says where its room goes, and it goes there', async () => {
     await page.getByText('Its 1 room(s) move to First floor, with their readings, photos and logger files. Its dwelling facts and system go with it.').waitFor();
     await page.getByRole('button', { name: 'Remove this area' }).click();

@@ -157,6 +157,10 @@ describe('remembered facts', () => {
     await writeMeta(connection, 'lastOpen', { surveyId: 'abc', roomId: 'def' });
     expect(await readMeta(connection, 'lastBackupAt')).toBe('2026-01-14T18:00:00Z');
     expect(await readMeta(connection, 'lastOpen')).toEqual({ surveyId: 'abc', roomId: 'def' });
+    await writeMeta(connection, 'lastOpen', { surveyId: 'abc', areaId: 'ghi' });
+    expect(await readMeta(connection, 'lastOpen')).toEqual({ surveyId: 'abc', areaId: 'ghi' });
+    await (await connection.get()).put('meta', { key: 'lastOpen', value: { surveyId: 'abc', areaId: 7 } });
+    expect(await readMeta(connection, 'lastOpen')).toBeUndefined();
     await (await connection.get()).put('meta', { key: 'lastOpen', value: 42 });
     expect(await readMeta(connection, 'lastOpen')).toBeUndefined();
   });
