@@ -87,14 +87,14 @@ export function siteInputs(survey: Survey): SiteInputs {
       );
     }
   }
-  if (survey.terrain === undefined || survey.storeys === undefined) {
-    warnings.push(
-      analysisWarning(
-        'state-assumed',
-        'info',
-        `Terrain or storeys not recorded: ${survey.terrain === undefined ? 'urban terrain' : ''}${survey.terrain === undefined && survey.storeys === undefined ? ' and ' : ''}${survey.storeys === undefined ? '2 storeys' : ''} assumed for the wind at the building.`,
-      ),
-    );
+  const assumed = [
+    survey.terrain === undefined ? 'urban terrain (for the wind at the building)' : null,
+    survey.storeys === undefined ? '2 storeys (for the wind and the stack effect)' : null,
+    survey.shelter === undefined ? 'some shelter from neighbouring buildings (for the leakage)' : null,
+  ].filter((x): x is string => x !== null);
+  if (assumed.length > 0) {
+    const list = assumed.length === 1 ? assumed[0]! : `${assumed.slice(0, -1).join(', ')} and ${assumed.at(-1)!}`;
+    warnings.push(analysisWarning('state-assumed', 'info', `Not recorded, so assumed: ${list}. Record ${assumed.length === 1 ? 'it' : 'them'} on the survey details.`));
   }
   return {
     site: { terrain: TERRAIN[survey.terrain ?? 'urban'], buildingHeight_m: storeys * ASSUMED_STOREY_HEIGHT_M },

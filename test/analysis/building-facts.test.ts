@@ -12,6 +12,7 @@ import type { Survey } from '../../src/model/survey.ts';
 import type { SurveyDocument } from '../../src/model/survey-document.ts';
 import { surveyDocumentSchema } from '../../src/model/survey-document.ts';
 import { demoFile } from '../support/fixtures.ts';
+import { siteInputs } from '../../src/analysis/site-inputs.ts';
 
 const school = (): SurveyDocument => surveyDocumentSchema.parse(demoFile().surveys[0]);
 const DRAWS = 200;
@@ -74,5 +75,17 @@ describe('building facts in the findings', () => {
     // The same figure as the demo's own record: the form adds nothing of its own.
     const original = roomWith({}, 'Classroom B1', { ...school(), instruments: [stated, ...school().instruments.slice(1)] });
     expect(after.measured.map((m) => m.supply_m3s)).toEqual(original.measured.map((m) => m.supply_m3s));
+  });
+
+  it('names each building fact it had to assume, shelter included, and none once all are recorded', () => {
+    const note = (facts: Partial<Pick<Survey, 'terrain' | 'shelter' | 'storeys'>>) => {
+      const survey = { ...school().survey, terrain: undefined, shelter: undefined, storeys: undefined, ...facts };
+      return siteInputs(survey).warnings.find((w) => w.code === 'state-assumed')?.message;
+    };
+    expect(note({})).toBe(
+      'Not recorded, so assumed: urban terrain (for the wind at the building), 2 storeys (for the wind and the stack effect) and some shelter from neighbouring buildings (for the leakage). Record them on the survey details.',
+    );
+    expect(note({ terrain: 'urban', storeys: 3 })).toBe('Not recorded, so assumed: some shelter from neighbouring buildings (for the leakage). Record it on the survey details.');
+    expect(note({ terrain: 'urban', storeys: 3, shelter: 'exposed' })).toBeUndefined();
   });
 });
