@@ -17,6 +17,8 @@ export const FAN_DIRECTION = options({ extract: 'Extract', supply: 'Supply' });
 export const ISOLATOR = options({ on: 'On', off: 'Off', none: 'None fitted', 'not-found': 'Not found' });
 export const DUCTING = options({ ducted: 'Ducted outside', recirculating: 'Recirculating', 'through-wall': 'Through the wall' });
 export const SEX = options({ mixed: 'Mixed', female: 'Female', male: 'Male' });
+/** How full a room is over a period of its day (the model's presence). */
+export const PRESENCE_WORDS = options({ full: 'Full', half: 'Half full', empty: 'Empty', airing: 'Empty, aired (windows open)' });
 export const FACING = options({ N: 'N', NE: 'NE', E: 'E', SE: 'SE', S: 'S', SW: 'SW', W: 'W', NW: 'NW' });
 
 
