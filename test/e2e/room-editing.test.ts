@@ -7,18 +7,21 @@
  * controls reached and used from the keyboard; nothing wider than a 360 px phone.
  */
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
+import { mkdirSync } from 'node:fs';
 import type { BrowserContext, Page } from 'playwright-core';
 import { openWatchedPhone } from '../support/browser.ts';
 import { axeViolations } from '../support/axe.ts';
 import { countWork, settledWork, workOfOneEdit, type PageWork } from '../support/page-work.ts';
 
 const baseURL = inject('baseURL');
+const shots = new URL('../../test-results/room-editing/', import.meta.url).pathname;
 
 describe.skipIf(!baseURL)('editing a room in Chromium (phone)', () => {
   let context: BrowserContext;
   let page: Page;
   let close: () => Promise<void>;
   let problems: string[];
+  const shot = (name: string, selector: string) => page.locator(selector).screenshot({ path: `${shots}${name}.png` });
   const saved = () => page.getByTestId('save-status').getByText(/Saved on this device/).waitFor();
 
   /** Press Tab until the control named `name` has focus (at most 80 presses), as a keyboard user would. */
@@ -32,6 +35,7 @@ describe.skipIf(!baseURL)('editing a room in Chromium (phone)', () => {
   }
 
   beforeAll(async () => {
+    mkdirSync(shots, { recursive: true });
     ({ context, page, close, problems } = await openWatchedPhone());
     await page.addInitScript(countWork);
     await page.clock.install({ time: new Date('2026-01-14T09:00:00') });
@@ -62,7 +66,13 @@ describe.skipIf(!baseURL)('editing a room in Chromium (phone)', () => {
   it('copies the school day in as the room’s own day; adding a period saves once, analyses once, and the page goes quiet', async () => {
     await page.getByRole('button', { name: 'Set this room’s own day, starting from the school day (lessons and breaks)' }).click();
     await page.getByText('This room has its own day of 11 periods, used instead of the template.').waitFor();
-    await expect(page.getByLabel('Starts').first().inputValue()).resolves.toBe('07:30');
+    await expect(page.locator('#day-0-start').inputValue()).resolves.toBe('07:30'); // the first period is open to change
+    await page.getByText('10:15–11:25 · Full').waitFor(); // the others are one line each
+    await page.locator('#day-0-label').focus();
+    await tabTo('Change period 2'); // from the keyboard
+    await page.keyboard.press('Enter');
+    await expect(page.locator('#day-1-start').inputValue()).resolves.toBe('08:40');
+    expect(await page.locator('#day-0-start').count()).toBe(0); // one open at a time
     await saved();
     const before: PageWork = await settledWork(page);
     await page.getByRole('button', { name: 'Add a period' }).click();
@@ -84,6 +94,7 @@ describe.skipIf(!baseURL)('editing a room in Chromium (phone)', () => {
     await page.locator('#day-11-label').fill('parents’ evening');
     await page.getByRole('heading', { name: 'Period 12: parents’ evening' }).waitFor();
     await saved();
+    await shot('own-day', '#section-day');
   });
 
   it('shows findings over the room’s own day, with the Findings link usable at once', async () => {
@@ -119,6 +130,7 @@ describe.skipIf(!baseURL)('editing a room in Chromium (phone)', () => {
     await page.getByText('Whole room: 142 m³').waitFor(); // + 2.4 × 1.5 × 2.7 = 9.72 m³ → 142.02 m³
     await page.getByTestId('room-totals').getByText('· floor 52.6 m²').waitFor(); // 49 + 3.6 m²
     await saved();
+    await shot('parts', '#section-use');
     await page.reload();
     await page.getByRole('heading', { name: 'Part 2' }).waitFor();
     await expect(page.locator('#part-1-length').inputValue()).resolves.toBe('2.4');
@@ -154,6 +166,7 @@ describe.skipIf(!baseURL)('editing a room in Chromium (phone)', () => {
     await form.getByRole('button', { name: 'Save the correction' }).click();
     await form.getByText('CO₂ must be between 250 and 10,000 ppm (check the meter and the units it shows)').waitFor();
     await expect(form.getByLabel('CO₂', { exact: true }).inputValue()).resolves.toBe('9,5'); // the typed text is kept
+    await shot('correction', '#section-readings');
     await form.getByLabel('CO₂', { exact: true }).fill('950');
     await form.getByLabel('Time taken').fill('09:20');
     await form.getByRole('group', { name: 'Windows' }).getByText('Some open').click();
