@@ -31,6 +31,8 @@ export class Autosave<T> {
 
   private latest: T | undefined;
   private dirty = false;
+  /** The input on screen was refused since the last edit (a save landing after it must not say "saved"). */
+  private refused = false;
   private timer: ReturnType<typeof setTimeout> | undefined;
   private running: Promise<void> | null = null;
   private release: (() => void) | null = null;
@@ -46,6 +48,7 @@ export class Autosave<T> {
   edit(value: T): void {
     this.latest = $state.snapshot(value) as T;
     this.dirty = true;
+    this.refused = false;
     if (this.state !== 'failed') this.state = 'pending';
     this.holdUnsaved();
     clearTimeout(this.timer);
@@ -56,6 +59,7 @@ export class Autosave<T> {
   refuse(message: string): void {
     clearTimeout(this.timer);
     this.dirty = false;
+    this.refused = true;
     this.state = 'failed';
     this.error = message;
     this.holdUnsaved();
@@ -71,8 +75,9 @@ export class Autosave<T> {
     this.state = 'saving';
     this.running = this.options.save(value).then(
       () => {
-        this.error = null;
         this.savedAt = (this.options.now ?? (() => new Date()))();
+        if (this.refused) return; // the input now on screen was refused while this save ran: still NOT SAVED
+        this.error = null;
         if (this.dirty) {
           this.state = 'pending';
         } else {
@@ -103,6 +108,7 @@ export class Autosave<T> {
    */
   closeForm(): void {
     if (this.state !== 'failed' || this.dirty) return;
+    this.refused = false;
     this.state = 'saved';
     this.error = null;
     this.release?.();

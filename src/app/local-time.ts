@@ -29,3 +29,14 @@ export function clockSeconds(iso: string): number {
   const m = /T(\d{2}):(\d{2})(?::(\d{2}(?:\.\d+)?))?/.exec(iso);
   return m ? Number(m[1]) * 3600 + Number(m[2]) * 60 + Number(m[3] ?? 0) : 0;
 }
+
+/**
+ * A stored moment with its clock time corrected to "hh:mm", keeping its date and offset (the
+ * seconds too when the minute is unchanged); undefined when the time is not "hh:mm".
+ * Example: withClockTime('2026-01-14T09:05:30+00:00', '09:15') = '2026-01-14T09:15:00+00:00'.
+ */
+export function withClockTime(iso: string, hhmm: string): string | undefined {
+  if (!/^(?:[01]\d|2[0-3]):[0-5]\d$/.test(hhmm)) return undefined;
+  if (clockOf(iso) === hhmm) return iso;
+  return iso.replace(/T\d{2}:\d{2}(?::\d{2}(?:\.\d+)?)?/, `T${hhmm}:00`);
+}

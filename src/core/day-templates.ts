@@ -66,6 +66,23 @@ const TIMETABLES: Record<TemplateRoomUse, readonly Slot[]> = {
   ],
 };
 
+/** One period of a template's timetable, as the surveyor would write it down. */
+export interface TimetablePeriod {
+  /** "hh:mm" on the 24-hour clock; an end before its start runs past midnight. */
+  start: string;
+  end: string;
+  presence: Presence;
+  label: string;
+}
+
+/**
+ * The template's timetable as periods, to start a room's own day from.
+ * Example: templateTimetable('bedroom')[1] = { start: '22:15', end: '06:45', presence: 'full', label: 'asleep' }.
+ */
+export function templateTimetable(use: TemplateRoomUse): TimetablePeriod[] {
+  return TIMETABLES[use].map(([start, end, presence, label]) => ({ start, end, presence, label }));
+}
+
 function seconds(hhmm: string): number {
   const [h, m] = hhmm.split(':').map(Number);
   return (h ?? 0) * 3600 + (m ?? 0) * 60;

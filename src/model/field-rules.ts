@@ -31,10 +31,14 @@ export const dateTime = z.iso.datetime({ offset: true, error: 'must be a date an
 /** A calendar date (ISO 8601), as 2026-11-30. */
 export const calendarDate = z.iso.date({ error: 'must be a date such as 2026-11-30' });
 
-/** A time of day on the 24-hour clock, as 08:40. */
-export const clockTime = z
-  .string()
-  .regex(/^(?:[01]\d|2[0-3]):[0-5]\d$/, { error: 'must be a time of day such as 08:40' });
+/**
+ * A time of day on the 24-hour clock, as 08:40, with the field named in its message:
+ * clockTimeOf('Period start') rejects "8.40" with "Period start must be a time of day such as 08:40".
+ */
+export function clockTimeOf(label: string) {
+  const message = `${label} must be a time of day such as 08:40`;
+  return z.string({ error: message }).regex(/^(?:[01]\d|2[0-3]):[0-5]\d$/, { error: message });
+}
 
 /** Free text that may be empty (""). */
 export function text(label: string, max = MAX_NAME_LENGTH) {

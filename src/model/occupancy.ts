@@ -5,7 +5,8 @@
  */
 import { z } from 'zod';
 import { AGE_BANDS, type AgeBand } from '../core/age-bands.ts';
-import { choice, clockTime, measure, recordId, text } from './field-rules.ts';
+import { choice, clockTimeOf, measure, recordId, text } from './field-rules.ts';
+import { dayPeriodProblems } from './day-periods.ts';
 
 const ageBands = AGE_BANDS as unknown as readonly [AgeBand, ...AgeBand[]];
 
@@ -22,18 +23,26 @@ export const occupantGroupSchema = z.strictObject({
 export const PRESENCE = ['full', 'half', 'empty', 'airing'] as const;
 
 export const schedulePeriodSchema = z.strictObject({
-  start: clockTime,
+  start: clockTimeOf('Period start'),
   /** An end before the start runs past midnight. */
-  end: clockTime,
+  end: clockTimeOf('Period end'),
   presence: choice('How full the room is', PRESENCE),
   label: text('Period name'),
 });
 
-export const scheduleSchema = z.strictObject({
-  /** Which of the app's day templates it started from, if any. */
-  template: text('Schedule template'),
-  periods: z.array(schedulePeriodSchema),
-});
+export const scheduleSchema = z
+  .strictObject({
+    /** Which of the app's day templates it started from, if any. */
+    template: text('Schedule template'),
+    /** The room's own day; when there are any, they are used instead of the template. */
+    periods: z.array(schedulePeriodSchema),
+  })
+  .superRefine((schedule, ctx) => {
+    // Each period lasts, and no two cover the same time (day-periods.ts).
+    for (const problem of dayPeriodProblems(schedule.periods)) {
+      ctx.addIssue({ code: 'custom', path: ['periods', ...problem.path], message: problem.message, input: schedule });
+    }
+  });
 
 export type OccupantGroupRecord = z.infer<typeof occupantGroupSchema>;
 export type Schedule = z.infer<typeof scheduleSchema>;

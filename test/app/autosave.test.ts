@@ -102,6 +102,22 @@ describe('autosave', () => {
     expect(unsavedInput.pending).toBe(true);
   });
 
+  it('keeps saying NOT SAVED when input is refused while an earlier save is still landing', async () => {
+    const { autosave, saved } = recorder();
+    autosave.edit('room as a box');
+    const landing = autosave.flush(); // the save is in flight…
+    autosave.refuse('Room length must be a number in m'); // …when a part without its length is added
+    await landing;
+    expect(saved).toEqual(['room as a box']);
+    expect(autosave.state).toBe('failed');
+    expect(autosave.error).toBe('Room length must be a number in m');
+    expect(unsavedInput.forms).toContain('test form');
+    autosave.edit('room of two parts'); // the length typed: valid again
+    await autosave.flush();
+    expect(autosave.state).toBe('saved');
+    expect(autosave.error).toBeNull();
+  });
+
   it('lets refused input go when its form closes, but keeps a failed save of valid input', async () => {
     const { autosave, failWith } = recorder();
     autosave.refuse('Survey title is empty: give the survey a name');

@@ -10,6 +10,7 @@ import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import type { BrowserContext, Page } from 'playwright-core';
 import { openPhone } from '../support/browser.ts';
+import { countWork, settledWork, workOfOneEdit } from '../support/page-work.ts';
 
 const baseURL = inject('baseURL');
 const shots = new URL('../../test-results/walk/', import.meta.url).pathname;
@@ -27,6 +28,7 @@ describe.skipIf(!baseURL)('the walk in Chromium (phone)', () => {
     page = context.pages()[0] ?? (await context.newPage());
     page.on('pageerror', (error) => problems.push(error.message));
     page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
+    await page.addInitScript(countWork);
     await page.clock.install({ time: new Date('2026-01-14T09:00:00') });
     await page.goto(baseURL);
     await page.evaluate(() => navigator.serviceWorker.ready.then(() => true));
@@ -106,8 +108,18 @@ describe.skipIf(!baseURL)('the walk in Chromium (phone)', () => {
     await page.getByTestId('save-status').getByText(/Saved on this device/).waitFor();
   });
 
-  it('records people, a window, a vent and a fan test', async () => {
+  it('records people and the room’s own day: adding a period saves once, analyses once, then the page goes quiet', async () => {
     await page.getByRole('button', { name: /Add usual people: 30 pupils, 1 teacher/ }).click();
+    await page.getByRole('button', { name: /^Set this room’s own day, starting from the school day/ }).click();
+    await page.getByTestId('save-status').getByText(/Saved on this device/).waitFor();
+    const before = await settledWork(page);
+    await page.getByRole('button', { name: 'Add a period' }).click();
+    await page.getByRole('heading', { name: 'Period 12' }).waitFor();
+    await page.getByTestId('save-status').getByText(/Saved on this device/).waitFor();
+    expect(await workOfOneEdit(page, before)).toMatchObject({ roomPuts: 1, analyses: 1, quiet: true });
+  });
+
+  it('records a window, a vent and a fan test', async () => {
     await page.getByRole('button', { name: 'Add a window' }).click();
     await page.getByLabel('Opening sash width').fill('0,6');
     await page.getByLabel('Opening sash height').fill('1,1');
@@ -153,7 +165,7 @@ describe.skipIf(!baseURL)('the walk in Chromium (phone)', () => {
 
   it('shows the room’s findings with the decay as its best measurement, its priority and its mould check', async () => {
     await page.getByRole('link', { name: 'Finish the test' }).click();
-    await page.getByRole('link', { name: 'Findings' }).click();
+    await page.getByRole('link', { name: 'Findings' }).click({ timeout: 5000 }); // stable at once: no re-laying out
     await page.getByText('Decay test, 09:00–09:12 — the best measurement here').waitFor({ timeout: 30_000 });
     await page.getByTestId('headline').getByText(/measured/).waitFor();
     await expect(page.getByTestId('priority').first().innerText()).resolves.toMatch(/Act now|Act within weeks|Plan an improvement|No action found/);

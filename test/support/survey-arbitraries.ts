@@ -21,8 +21,17 @@ const int = (min: number, max: number) => fc.integer({ min, max });
 const when = fc.date({ min: new Date('2020-01-01T00:00:00Z'), max: new Date('2035-12-31T00:00:00Z'), noInvalidDate: true });
 const dateTime = () => when.map((d) => d.toISOString());
 const date = () => when.map((d) => d.toISOString().slice(0, 10));
-const clock = () => fc.tuple(int(0, 23), int(0, 59)).map(([h, m]) => `${String(h).padStart(2, '0')}:${String(m).padStart(2, '0')}`);
 const pick = <T extends readonly unknown[]>(values: T) => fc.constantFrom(...values);
+const hhmm = (minute: number) => `${String(Math.floor(minute / 60)).padStart(2, '0')}:${String(minute % 60).padStart(2, '0')}`;
+/** Up to three periods of a day that never overlap (the model refuses overlaps), in any order. */
+const dayPeriods = () =>
+  fc
+    .tuple(fc.uniqueArray(int(0, 1439), { maxLength: 6 }), fc.boolean())
+    .chain(([minutes, reversed]) => {
+      const sorted = [...minutes].sort((a, b) => a - b);
+      const spans = Array.from({ length: Math.floor(sorted.length / 2) }, (_, i) => [sorted[2 * i]!, sorted[2 * i + 1]!] as const);
+      return fc.tuple(...spans.map(([from, to]) => fc.record({ start: fc.constant(hhmm(from)), end: fc.constant(hhmm(to)), presence: pick(['full', 'half', 'empty', 'airing'] as const), label: text() }))).map((periods) => (reversed ? periods.reverse() : periods));
+    });
 const PLACEHOLDER = 'id';
 const optional = <T extends Record<string, fc.Arbitrary<unknown>>>(shape: T, required: (keyof T)[]) =>
   fc.record(shape, { requiredKeys: required as never });
@@ -96,7 +105,7 @@ const room = optional(
       { maxLength: 2 },
     ),
     occupants: fc.array(fc.record({ id: fc.constant(PLACEHOLDER), label: text(), count: int(1, 10_000), ageBand: pick(AGE_BANDS), sex: pick(['male', 'female', 'mixed'] as const), activity_met: num(0.7, 8) }), { maxLength: 2 }),
-    schedule: fc.record({ template: text(), periods: fc.array(fc.record({ start: clock(), end: clock(), presence: pick(['full', 'half', 'empty', 'airing'] as const), label: text() }), { maxLength: 3 }) }),
+    schedule: fc.record({ template: text(), periods: dayPeriods() }),
     openings: fc.array(opening, { maxLength: 4 }),
     appliances: fc.array(fc.record({ id: fc.constant(PLACEHOLDER), kind: pick(['gas-boiler', 'open-fire'] as const), flue: pick(['room-sealed', 'open-flued', 'flueless', 'not-known'] as const), combustionAirVentPresent: pick(CHECK_ANSWERS), combustionAirVentClear: pick(CHECK_ANSWERS), coAlarmPresent: pick(CHECK_ANSWERS), coAlarmTested: pick(CHECK_ANSWERS), gasSafetyRecordSeen: pick(['yes', 'no', 'not-checked', 'not-applicable'] as const), notes: text() }), { maxLength: 1 }),
     defects: fc.array(optional({ id: fc.constant(PLACEHOLDER), kind: pick(['mould', 'condensation', 'fan-dead'] as const), location: text(), extent_m2: num(0, 1000), pattern: pick(['spots', 'patches'] as const), openingId: ref(), notes: text() }, ['id', 'kind', 'location', 'notes']), { maxLength: 2 }),

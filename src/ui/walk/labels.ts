@@ -27,6 +27,8 @@ export const DWELLING_SYSTEM = options({
   other: 'Other',
 });
 export const TERMINAL_SETTING = options({ normal: 'Normal', boost: 'Boost', other: 'Other' });
+/** How full a room is over a period of its day (the model's presence). */
+export const PRESENCE_WORDS = options({ full: 'Full', half: 'Half full', empty: 'Empty', airing: 'Empty, aired (windows open)' });
 export const FACING = options({ N: 'N', NE: 'NE', E: 'E', SE: 'SE', S: 'S', SW: 'SW', W: 'W', NW: 'NW' });
 
 
