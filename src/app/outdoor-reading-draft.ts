@@ -7,7 +7,7 @@
  * Example: changing '2026-01-14T08:05:00Z' to 08:20 gives '2026-01-14T08:20:00Z'; left at 08:05 it
  * stays '2026-01-14T08:05:00Z' (seconds included).
  */
-import { clockTime } from '../model/field-rules.ts';
+import { clockTimeOf } from '../model/field-rules.ts';
 import { outdoorReadingSchema, type Survey } from '../model/survey.ts';
 import { validationProblems, type ValidationProblem } from '../model/validation-problem.ts';
 import { clockOf, localIso } from './local-time.ts';
@@ -63,7 +63,7 @@ export function outdoorReadingFromDraft(draft: OutdoorDraft, original: OutdoorRe
   let time = localIso(now);
   if (original) {
     if (draft.clock === clockOf(original.time)) time = original.time;
-    else if (!clockTime.safeParse(draft.clock).success) {
+    else if (!clockTimeOf('Time taken').safeParse(draft.clock).success) {
       return { ok: false, problems: [{ field: 'time', message: `Time taken ${draft.clock ? 'must be a time of day such as 08:40' : 'is empty: fill it in'}`, value: draft.clock }] };
     } else time = withClockTime(original.time, draft.clock);
   }
