@@ -8,8 +8,10 @@
  * 2. `addRoomList(surveyId, read)` saves the rooms and areas read, all or none, in one
  *    transaction (store/add-rooms.ts). The rows with problems are not saved: the screen lists
  *    them so they can be fixed in the file and read again, or typed in.
+ *
+ * The file reader (with its CSV parser) is loaded at the first room list, not with the survey.
  */
-import { readRoomList, type OccupantDefaults, type RoomListResult } from '../ingest/room-list.ts';
+import type { OccupantDefaults, RoomListResult } from '../ingest/room-list.ts';
 import { ROOM_LIST_ROLE_LABELS, type RoomListOverrides } from '../ingest/room-list-columns.ts';
 
 export type { RoomListResult };
@@ -30,6 +32,7 @@ export interface RoomListChoices {
 export async function readRoomListFile(surveyId: string, file: Blob, choices: RoomListChoices = {}, now: Date = new Date()): Promise<RoomListResult> {
   const survey = await loadSurvey(connection, surveyId, { photos: false });
   const bytes = new Uint8Array(await file.arrayBuffer());
+  const { readRoomList } = await import('../ingest/room-list.ts');
   return readRoomList(bytes, {
     ...choices,
     newId: () => crypto.randomUUID(),

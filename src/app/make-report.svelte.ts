@@ -5,10 +5,9 @@
  * works. The PDF and the results CSV are then handed over from a second tap: shared through the
  * share sheet (called straight in the tap; a cancelled share is not an error), or downloaded where
  * the browser cannot share files — never downloaded in an installed iOS app, which has no downloads.
+ * The analysis and report-model code is loaded with the renderer, at the first report, so the
+ * survey screens start without it.
  */
-import { analyseSurvey } from '../analysis/analyse-survey.ts';
-import { buildReport } from '../report/report-model.ts';
-import { roomResultsCsv } from '../report/report-csv.ts';
 import { loadSurvey } from '../store/load-survey.ts';
 import { canShareFile, downloadFile, shareFile } from './deliver-file.ts';
 import { deviceStatus } from './device-status.svelte.ts';
@@ -59,6 +58,12 @@ class ReportMaker {
       if (!doc) throw new Error('This survey is no longer on the device.');
       this.step = 'Working out the figures';
       await yieldToPage();
+      if (controller.signal.aborted) throw new DOMException('cancelled', 'AbortError');
+      const [{ analyseSurvey }, { buildReport }, { roomResultsCsv }] = await Promise.all([
+        import('../analysis/analyse-survey.ts'),
+        import('../report/report-model.ts'),
+        import('../report/report-csv.ts'),
+      ]);
       if (controller.signal.aborted) throw new DOMException('cancelled', 'AbortError');
       const results = analyseSurvey(doc);
       // A repeat visit gains "Since the last visit" (when the earlier survey is still on the device).

@@ -6,9 +6,12 @@
  *
  * 'none': the survey did not start from an earlier one; 'previous-gone': the earlier survey is
  * no longer on the device (restore it from a backup to compare).
+ *
+ * The analysis and comparison code is loaded only when there is an earlier visit to compare, so a
+ * first visit's overview does not wait for it.
  */
-import { analyseSurvey, type AnalysisOptions } from '../analysis/analyse-survey.ts';
-import { compareVisits, type FigureChange, type RoomChange, type VisitComparison } from '../analysis/compare-visits.ts';
+import type { AnalysisOptions } from '../analysis/analyse-survey.ts';
+import type { FigureChange, RoomChange, VisitComparison } from '../analysis/compare-visits.ts';
 
 export type { RoomChange, VisitComparison };
 import { loadSurvey } from '../store/load-survey.ts';
@@ -25,6 +28,7 @@ export async function sinceLastVisit(surveyId: string, options: AnalysisOptions 
   if (!current || previousId === undefined) return { status: 'none' };
   const previous = await loadSurvey(connection, previousId, { photos: false });
   if (!previous) return { status: 'previous-gone', previousSurveyId: previousId };
+  const [{ analyseSurvey }, { compareVisits }] = await Promise.all([import('../analysis/analyse-survey.ts'), import('../analysis/compare-visits.ts')]);
   const comparison = compareVisits(
     { document: previous, results: analyseSurvey(previous, options) },
     { document: current, results: analyseSurvey(current, options) },

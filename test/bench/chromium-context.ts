@@ -2,12 +2,9 @@
  * Chromium mode for `npm run bench`: builds the app, serves it on 127.0.0.1 and opens it in a
  * phone-sized page. Returns undefined (after saying why) when no Chromium is installed.
  */
-import { fileURLToPath } from 'node:url';
-import { build, preview } from 'vite';
 import type { BenchContext } from './bench-context.ts';
+import { serveBuiltApp } from './built-app.ts';
 import { findChromium, INSTALL_HINT, openPhone } from '../support/browser.ts';
-
-const configFile = fileURLToPath(new URL('../../vite.config.ts', import.meta.url));
 
 export async function openChromiumContext(
   report: BenchContext['report'],
@@ -16,19 +13,15 @@ export async function openChromiumContext(
     console.log(`  skipped: ${INSTALL_HINT}`);
     return undefined;
   }
-  process.env.NODE_ENV = 'production';
-  await build({ configFile, mode: 'production', logLevel: 'warn' });
-  const server = await preview({ configFile, logLevel: 'warn', preview: { port: 4181, strictPort: false } });
-  const url = server.resolvedUrls?.local[0];
-  if (!url) throw new Error('The preview server did not report an address');
+  const app = await serveBuiltApp();
   const phone = await openPhone();
   const page = phone.context.pages()[0] ?? (await phone.context.newPage());
-  await page.goto(url);
+  await page.goto(app.url);
   return {
-    ctx: { report, page },
+    ctx: { report, page, baseURL: app.url },
     close: async () => {
       await phone.close();
-      await server.close();
+      await app.close();
     },
   };
 }
