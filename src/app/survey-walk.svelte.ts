@@ -22,7 +22,7 @@ import { duplicateRoom } from '../store/duplicate-room.ts';
 import { loadSurvey } from '../store/load-survey.ts';
 import { getPhotoBytes, listPhotos } from '../store/photos.ts';
 import { reorderRooms } from '../store/reorder-rooms.ts';
-import { deleteArea, deleteReading, deleteRoom } from '../store/remove-parts.ts';
+import { deleteArea, deleteInstrument, deleteReading, deleteRoom } from '../store/remove-parts.ts';
 import { getSurvey } from '../store/surveys.ts';
 import { saveArea, saveInstrument, saveReading, saveRoom, saveSeries } from '../store/survey-parts.ts';
 import { addPhoto, type PhotoPlace } from './add-photo.ts';
@@ -272,6 +272,13 @@ class SurveyWalk {
   async saveArea(area: Area, now = new Date()): Promise<void> {
     const saved = await saveArea(connection, this.doc!.survey.id, $state.snapshot(area) as Area, now.toISOString());
     this.upsert(this.doc!.areas, saved);
+    this.analyse();
+  }
+
+  /** Remove an instrument added by mistake; the store refuses while any record names it. */
+  async removeInstrument(instrumentId: string, now = new Date()): Promise<void> {
+    await deleteInstrument(connection, this.doc!.survey.id, instrumentId, now.toISOString());
+    this.doc!.instruments = this.doc!.instruments.filter((i) => i.id !== instrumentId);
     this.analyse();
   }
 

@@ -2,11 +2,13 @@
  * Removing what was entered by mistake: a room (with its readings, photos and logger series; a
  * whole-dwelling terminal that served it keeps its place as a location), one reading (taken out
  * of any test that grouped it; a test left with fewer than two readings goes too), or an area
- * (its rooms and inner areas move to the area it sat in, or to no area: area-removal.ts). One transaction each, strict durability, saved only after `tx.done`; like any edit,
+ * (its rooms and inner areas move to the area it sat in, or to no area: area-removal.ts), or an
+ * instrument nothing refers to (instrument-uses.ts). One transaction each, strict durability, saved only after `tx.done`; like any edit,
  * it moves an issued revision on to the next and the survey's last change to `changedAt`.
  */
 import type { IDBPTransaction } from 'idb';
 import { areaRemovalPlan, movedTo } from '../model/area-removal.ts';
+import { instrumentUseWords, instrumentUses } from '../model/instrument-uses.ts';
 import { editableRevision } from '../model/revision-lock.ts';
 import { withoutTerminalRoom } from '../model/terminal-room-removal.ts';
 import type { Connection } from './connection.ts';
@@ -90,6 +92,27 @@ export async function deleteReading(connection: Connection, surveyId: string, re
         .filter((t) => t.readingIds.length >= 2);
       queue(tx.objectStore('rooms').put({ ...room, tests, updatedAt: changedAt }));
     }
+    return undefined;
+  });
+}
+
+/** Delete an instrument, refused while any record of the survey says it was measured with it. */
+export async function deleteInstrument(connection: Connection, surveyId: string, instrumentId: string, changedAt: string): Promise<void> {
+  await removeIn(connection, ['instruments', 'readings', 'rooms', 'areas', 'series'], surveyId, changedAt, async (tx) => {
+    const instrument = await tx.objectStore('instruments').get(instrumentId);
+    if (instrument?.surveyId !== surveyId) return 'This instrument is not in the survey';
+    const all = <S extends 'instruments' | 'readings' | 'rooms' | 'areas' | 'series'>(store: S) => tx.objectStore(store).index('bySurvey').getAll(ofSurvey(surveyId));
+    const [instruments, readings, rooms, areas, series, survey] = await Promise.all([
+      all('instruments'),
+      all('readings'),
+      all('rooms'),
+      all('areas'),
+      all('series'),
+      tx.objectStore('surveys').get(surveyId),
+    ]);
+    const uses = instrumentUseWords(instrumentUses({ outdoorReadings: survey?.outdoorReadings ?? [], instruments, readings, rooms, areas, series }, instrumentId));
+    if (uses) return `${instrument.model} is still named by ${uses}: it stays`;
+    queue(tx.objectStore('instruments').delete(instrumentId));
     return undefined;
   });
 }

@@ -225,6 +225,23 @@ describe.skipIf(!baseURL)('survey facts in Chromium (phone)', () => {
     await shot('visit-instrument-change');
   });
 
+  it('removes an instrument added by mistake in two taps; one the readings name says why it stays', async () => {
+    await page.goto(at('/visit'));
+    await page.getByText(new RegExp(`^Named by \\d+ readings.*, so it stays on the survey\\.$`)).first().waitFor();
+    await expect(page.getByRole('button', { name: `Remove ${handheld.model}` }).count()).resolves.toBe(0);
+    const add = page.getByRole('form', { name: 'Add an instrument' });
+    await add.getByLabel('Make and model').fill('Spare meter (invented)');
+    await add.getByText('CO₂', { exact: true }).click();
+    await add.getByRole('button', { name: 'Add instrument' }).click();
+    await page.getByRole('button', { name: 'Remove Spare meter (invented)' }).click();
+    await page.getByRole('button', { name: 'Yes, remove it' }).click();
+    await expect.poll(() => page.getByText('Spare meter (invented)').count()).toBe(0);
+    await page.reload();
+    await page.getByRole('heading', { name: 'Start of visit' }).waitFor();
+    await page.getByRole('button', { name: `Change details of ${handheld.model}` }).waitFor();
+    await expect(page.getByText('Spare meter (invented)').count()).resolves.toBe(0);
+  });
+
   it('raised no error in the page throughout', () => {
     expect(problems).toEqual([]);
   });

@@ -7,7 +7,8 @@
 import { describe, it, expect, afterEach } from 'vitest';
 import { importSurveys } from '../../src/store/backup.ts';
 import { loadSurvey } from '../../src/store/load-survey.ts';
-import { deleteArea, deleteReading, deleteRoom } from '../../src/store/remove-parts.ts';
+import { deleteArea, deleteInstrument, deleteReading, deleteRoom } from '../../src/store/remove-parts.ts';
+import { instrumentUseWords, instrumentUses } from '../../src/model/instrument-uses.ts';
 import { surveyDocumentSchema } from '../../src/model/survey-document.ts';
 import type { SurveyDocument } from '../../src/model/survey-document.ts';
 import { closeAll, dumpAll, freshConnection, testIds } from '../support/store-helpers.ts';
@@ -118,5 +119,39 @@ describe('removing parts of a survey', () => {
     await expect(deleteReading(connection, survey.survey.id, 'f0000000-0000-4000-8000-000000000000', '2026-04-20T08:00:00Z')).rejects.toThrow(/not in the survey/);
     await expect(deleteArea(connection, survey.survey.id, 'f0000000-0000-4000-8000-000000000000', '2026-04-20T08:00:00Z')).rejects.toThrow(/not in the survey/);
     expect(await dumpAll(connection)).toEqual(before);
+  });
+
+  it('refuses to remove an instrument that readings name, saying what names it, and changes nothing', async () => {
+    const { connection, survey } = await school();
+    const handheld = survey.instruments.find((i) => survey.rooms.some((r) => r.readings.some((x) => x.instrumentId === i.id)))!;
+    const parts = { ...survey, outdoorReadings: survey.survey.outdoorReadings, readings: survey.rooms.flatMap((r) => r.readings) };
+    const uses = instrumentUses(parts, handheld.id);
+    // Counted by hand from the demo file's records (test/fixtures/demo-survey.json).
+    expect(uses.readings).toBe(parts.readings.filter((r) => r.instrumentId === handheld.id).length);
+    expect(uses.outdoorReadings).toBe(survey.survey.outdoorReadings.filter((r) => r.instrumentId === handheld.id).length);
+    const words = instrumentUseWords(uses);
+    expect(words).toMatch(/^\d+ readings/);
+    const before = await dumpAll(connection);
+    await expect(deleteInstrument(connection, survey.survey.id, handheld.id, '2026-04-20T08:00:00Z')).rejects.toThrow(`${handheld.model} is still named by ${words}: it stays`);
+    expect(await dumpAll(connection)).toEqual(before);
+  });
+
+  it('removes an instrument nothing names, and the survey stays valid', async () => {
+    const connection = freshConnection();
+    const file = demoFile();
+    const survey = file.surveys[0]!;
+    const spare = { id: '0e0e0000-0000-4000-8000-000000000701', model: 'Spare meter (invented)', serial: '', measures: ['co2' as const], accuracy: [], checks: [], notes: '' };
+    await importSurveys(connection, { ...file, surveys: [{ ...survey, instruments: [...survey.instruments, spare] }] }, {}, testIds());
+    await deleteInstrument(connection, survey.survey.id, spare.id, '2026-04-20T08:00:00Z');
+    const loaded = (await loadSurvey(connection, survey.survey.id, { photos: false }))!;
+    expect(loaded.instruments.map((i) => i.id)).toEqual(survey.instruments.map((i) => i.id));
+    expect(loaded.survey.updatedAt).toBe('2026-04-20T08:00:00Z');
+    expect(surveyDocumentSchema.safeParse(loaded).success).toBe(true);
+  });
+
+  it('words the uses of an instrument in a list', () => {
+    expect(instrumentUseWords({ readings: 1, outdoorReadings: 0, fanTests: 2, terminals: 0, loggerFiles: 1, checks: 0 })).toBe('1 reading, 2 fan tests and 1 logger file');
+    expect(instrumentUseWords({ readings: 0, outdoorReadings: 0, fanTests: 0, terminals: 0, loggerFiles: 0, checks: 1 })).toBe('1 side-by-side check of another meter');
+    expect(instrumentUseWords({ readings: 0, outdoorReadings: 0, fanTests: 0, terminals: 0, loggerFiles: 0, checks: 0 })).toBe('');
   });
 });
