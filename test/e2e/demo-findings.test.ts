@@ -5,7 +5,7 @@
  */
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openWatchedPhone } from '../support/browser.ts';
+import { openWatchedPhone, screenBuilt } from '../support/browser.ts';
 import { axeViolations } from '../support/axe.ts';
 import { demoFile } from '../support/fixtures.ts';
 import { tabTo } from '../support/keyboard.ts';
@@ -81,6 +81,7 @@ describe.skipIf(!baseURL)('demo surveys in Chromium (phone)', () => {
     const room = doc.rooms[1]!;
     await page.goto(`${baseURL}#/survey/${doc.survey.id}/room/${room.id}`);
     await page.getByRole('heading', { name: room.name, exact: true }).waitFor();
+    await screenBuilt(page);
     const before = await page.locator('#section-readings li').count();
     await tabTo(page, page.getByRole('button', { name: 'Reading now' }));
     await page.keyboard.press('Enter');

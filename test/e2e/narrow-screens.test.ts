@@ -6,7 +6,7 @@
  */
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openWatchedPhone } from '../support/browser.ts';
+import { openWatchedPhone, screenBuilt } from '../support/browser.ts';
 import { demoFile } from '../support/fixtures.ts';
 
 const baseURL = inject('baseURL');
@@ -51,6 +51,7 @@ describe.skipIf(!baseURL)('screens at 360 px and in landscape', () => {
       const look = async (hash: string, ready: () => Promise<unknown>) => {
         await page.goto(`${baseURL}${hash}`);
         await ready();
+        await screenBuilt(page);
         const over = await sidewaysScroll(page);
         if (over.length) wide.push(`${hash}: ${over.join('; ')}`);
       };

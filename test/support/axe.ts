@@ -9,6 +9,8 @@ type AxeRun = (ctx: Document, opts: object) => Promise<{ violations: Array<{ id:
 
 /** Violations on the whole page, or only inside the element `selector` names (e.g. one section). */
 export async function axeViolations(page: Page, selector?: string): Promise<string[]> {
+  // Check the whole screen, not one half-built: wait until no part is still being mounted.
+  await page.waitForFunction(() => document.querySelector('[aria-busy="true"]') === null);
   await page.addScriptTag({ content: axeSource });
   const result = await page.evaluate(async (within) => {
     const axe = (window as unknown as { axe: { run: AxeRun } }).axe;

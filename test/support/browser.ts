@@ -86,3 +86,8 @@ export async function openWatchedPhone(): Promise<{ context: BrowserContext; pag
   page.on('console', (m) => void (m.type() === 'error' && problems.push(m.text())));
   return { context, page, close, problems };
 }
+
+/** Wait until no part of the screen is still being built (a room mounts its parts a frame at a time). */
+export async function screenBuilt(page: Page): Promise<void> {
+  await page.waitForFunction(() => document.querySelector('[aria-busy="true"]') === null);
+}
