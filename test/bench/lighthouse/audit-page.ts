@@ -22,7 +22,7 @@ export interface PageAudit {
   /** Milliseconds, except CLS (unitless). */
   metrics: { fcp_ms: number; lcp_ms: number; tbt_ms: number; si_ms: number; cls: number };
   /** Audits counted in the three categories whose score is below Lighthouse's pass mark (0.9). */
-  failing: { id: string; title: string; category: Category; display: string }[];
+  failing: { id: string; title: string; category: Category; display: string; nodes: string[] }[];
   /** Audits of the three categories that could not run (no score; they do not count). */
   errored: { id: string; message: string }[];
   /** Requests to anywhere but 127.0.0.1 (there should be none). */
@@ -75,7 +75,10 @@ export async function auditPage(url: string, port: number): Promise<PageAudit> {
       if (audit?.scoreDisplayMode === 'error' && !errored.some((e) => e.id === audit.id)) errored.push({ id: audit.id, message: audit.errorMessage ?? '' });
       if (!audit || audit.score === null || audit.score >= PASS) continue;
       if (failing.some((f) => f.id === audit.id)) continue;
-      failing.push({ id: audit.id, title: audit.title, category, display: audit.displayValue ?? '' });
+      // The page elements an accessibility audit names (selector and markup), to find them quickly.
+      const items = (audit.details as { items?: { node?: { selector?: string; snippet?: string } }[] } | undefined)?.items ?? [];
+      const nodes = items.flatMap((i) => (i.node ? [`${i.node.selector ?? ''} ${i.node.snippet ?? ''}`.trim()] : [])).slice(0, 5);
+      failing.push({ id: audit.id, title: audit.title, category, display: audit.displayValue ?? '', nodes });
     }
   }
   const requests = (lhr.audits['network-requests']?.details as { items?: { url?: string }[] } | undefined)?.items ?? [];

@@ -56,7 +56,10 @@ async function auditPages(ctx: BenchContext, pages: [string, string][], profile:
         ...(runs > 1 ? { runs, performance_runs: audits.map((a) => a.scores.performance).join('/') } : {}),
       });
       ctx.report(`${name}, timings`, { ...typical.metrics, benchmarkIndex: typical.benchmarkIndex, load_1min: loadavg()[0]!, offHost_requests: typical.offHost.length });
-      for (const f of typical.failing) console.log(`    not passed (${f.category}): ${f.id} — ${f.title}${f.display ? ` (${f.display})` : ''}`);
+      for (const f of typical.failing) {
+        console.log(`    not passed (${f.category}): ${f.id} — ${f.title}${f.display ? ` (${f.display})` : ''}`);
+        for (const n of f.nodes) console.log(`      at ${n}`);
+      }
       if (typical.errored.length > 0) console.log(`    could not run (not scored): ${typical.errored.map((e) => e.id).join(', ')} — ${typical.errored[0]!.message.slice(0, 100)}`);
       for (const u of typical.offHost) console.log(`    request off 127.0.0.1: ${u}`);
       for (const w of typical.warnings) console.log(`    Lighthouse warning: ${w}`);
