@@ -71,7 +71,7 @@ export function outdoorLoggerLevel(values_ppm: readonly number[], options: { sam
     sd_ppm: sd,
     sameMeterAsRoom,
     readings: n,
-    source: `median of ${n} outdoor logger point${n === 1 ? '' : 's'} (middle half ${Math.round(lower)}–${Math.round(upper)} ppm)${sameMeterAsRoom ? ' on the room meter' : ''}`,
+    source: `median of ${n} point${n === 1 ? '' : 's'} (middle half ${Math.round(lower)}–${Math.round(upper)} ppm)${sameMeterAsRoom ? ' on the room meter' : ''}`,
     warnings,
     median_ppm: median,
     lowerQuartile_ppm: lower,
