@@ -1,7 +1,8 @@
 /**
  * Removing what was entered by mistake: a room (with its readings, photos and logger series; a
  * whole-dwelling terminal that served it keeps its place as a location), one reading (taken out
- * of any test that grouped it; a test left with fewer than two readings goes too), or an area
+ * of any test that grouped it; a test left with fewer than two readings goes too), one logger
+ * series (the outdoor logger's, say), or an area
  * (its rooms and inner areas move to the area it sat in, or to no area: area-removal.ts). One transaction each, strict durability, saved only after `tx.done`; like any edit,
  * it moves an issued revision on to the next and the survey's last change to `changedAt`.
  */
@@ -90,6 +91,16 @@ export async function deleteReading(connection: Connection, surveyId: string, re
         .filter((t) => t.readingIds.length >= 2);
       queue(tx.objectStore('rooms').put({ ...room, tests, updatedAt: changedAt }));
     }
+    return undefined;
+  });
+}
+
+/** Delete one logger series of a survey (a room's, or the outdoor logger). */
+export async function deleteSeries(connection: Connection, surveyId: string, seriesId: string, changedAt: string): Promise<void> {
+  await removeIn(connection, ['series'], surveyId, changedAt, async (tx) => {
+    const series = await tx.objectStore('series').get(seriesId);
+    if (series?.surveyId !== surveyId) return 'This logger file is not in the survey';
+    queue(tx.objectStore('series').delete(seriesId));
     return undefined;
   });
 }
