@@ -47,7 +47,7 @@ import { predictRoomSupplyOverCases } from '../core/room-supply-prediction.ts';
 import type { WeatherCases } from '../core/weather-cases.ts';
 
 /** The analysis's own version: raise it when a mapping or rule here changes a number. */
-export const ANALYSIS_VERSION = '0.2.0';
+export const ANALYSIS_VERSION = '0.3.0';
 
 export interface AnalysisOptions {
   draws?: number;
@@ -314,7 +314,7 @@ export function judgeSurvey(figures: SurveyFigures): AnalysisResults {
 
 /**
  * Analyse a validated survey document (see the file note): surveyFigures, then judgeSurvey.
- * Example: analyseSurvey(doc, { draws: 200 }).stamps = { engineVersion: '0.2.0', formatVersion: 1, analysisVersion: '0.2.0', criteria: { setId: 'schools', version: 1, edits: [] } }.
+ * Example: analyseSurvey(doc, { draws: 200 }).stamps = { engineVersion: '0.2.0', formatVersion: 1, analysisVersion: '0.3.0', criteria: { setId: 'schools', version: 1, edits: [] } }.
  */
 export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}): AnalysisResults {
   return judgeSurvey(surveyFigures(doc, options));
