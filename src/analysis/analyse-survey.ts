@@ -26,10 +26,12 @@ import { assessArea } from './area-assessment.ts';
 import { dayPlan } from './day-schedule.ts';
 import { bestMeasured, measureSet } from './measured-supply.ts';
 import { outdoorFor } from './meter-inputs.ts';
+import { dayOutdoorConditions } from './day-outdoor-conditions.ts';
+import { outdoorLoggerWindow, type OutdoorLoggerWindow } from './outdoor-logger-window.ts';
 import { asFoundCounts, designCounts, occupancyOf, roomAir, roomTemperature } from './occupancy-inputs.ts';
 import { readingSets } from './reading-sets.ts';
 import { reconcile } from './reconcile.ts';
-import type { AnalysisResults, MeasuredEstimate, RoomHeadline, RoomResults, SurveyJudgement } from './results.ts';
+import type { AnalysisResults, DayOutdoorConditions, MeasuredEstimate, RoomHeadline, RoomResults, SurveyJudgement } from './results.ts';
 import type { RoomAirflowInput } from '../core/airflow-inputs.ts';
 import { PRIORITY_LEVELS, priorityWords } from '../core/judgement/priority.ts';
 import { rankRooms } from '../core/judgement/rank-rooms.ts';
@@ -45,7 +47,7 @@ import { predictRoomSupplyOverCases } from '../core/room-supply-prediction.ts';
 import type { WeatherCases } from '../core/weather-cases.ts';
 
 /** The analysis's own version: raise it when a mapping or rule here changes a number. */
-export const ANALYSIS_VERSION = '0.2.0';
+export const ANALYSIS_VERSION = '0.3.0';
 
 export interface AnalysisOptions {
   draws?: number;
@@ -63,6 +65,10 @@ export interface SurveyContext {
   site: SiteInputs;
   cases: WeatherCases;
   outdoor_ppm: number;
+  /** The outdoor logger's points for the measurements, when one is on the survey. */
+  outdoorLogger: OutdoorLoggerWindow | null;
+  /** The day's outdoor temperature and humidity (day-outdoor-conditions.ts). */
+  dayOutdoor: DayOutdoorConditions;
   draws: number;
   seed: number;
   thresholds_ppm: readonly number[];
@@ -104,7 +110,7 @@ function analyseRoom(room: DocumentRoom, ctx: SurveyContext): AnalysedRoom {
 
   // Measured supply.
   const sets = readingSets(room, doc);
-  const measurementContext = { room, survey: doc.survey, instruments: doc.instruments, volume_m3: volume, air, asFound, plan, draws: ctx.draws, seed: ctx.seed };
+  const measurementContext = { room, survey: doc.survey, instruments: doc.instruments, outdoorLogger: ctx.outdoorLogger, volume_m3: volume, air, asFound, plan, draws: ctx.draws, seed: ctx.seed };
   const evaluated = sets.map((set) => measureSet(measurementContext, set));
   const measured = evaluated.flatMap((e) => e.estimates);
   for (const e of evaluated) if (e.estimates.length === 0) warnings.push(...e.warnings);
@@ -141,7 +147,7 @@ function analyseRoom(room: DocumentRoom, ctx: SurveyContext): AnalysedRoom {
   warnings.push(...scenarioOut.warnings);
 
   // Reconciliation: each measurement against the prediction for its own recorded state.
-  const day = dayWeatherCase(doc.survey, temp.value!);
+  const day = dayWeatherCase(doc.survey, temp.value!, ctx.dayOutdoor.temp_C);
   const reconciliation = measured
     .filter((m) => m.kind !== 'none')
     .map((m) => {
@@ -240,12 +246,15 @@ export function surveyFigures(doc: SurveyDocument, options: AnalysisOptions = {}
   const survey = doc.survey;
   const site = siteInputs(survey);
   const { cases, source } = weatherCases(survey);
-  const outdoor = outdoorFor(undefined, survey, doc.instruments);
+  const outdoorLogger = outdoorLoggerWindow(doc);
+  const outdoor = outdoorFor(undefined, survey, doc.instruments, outdoorLogger);
   const ctx: SurveyContext = {
     doc,
     site,
     cases,
     outdoor_ppm: outdoor.value_ppm,
+    outdoorLogger,
+    dayOutdoor: dayOutdoorConditions(doc),
     draws: options.draws ?? DEFAULT_DRAWS,
     seed: options.seed ?? 0,
     thresholds_ppm: options.thresholds_ppm ?? DEFAULT_THRESHOLDS_PPM,
@@ -282,13 +291,15 @@ export function judgeSurvey(figures: SurveyFigures): AnalysisResults {
     warnings.push(analysisWarning('weather-cases-assumed', 'info', 'No design weather cases are stated: predictions use the screening cases (cold and calm, cold and windy, mild and calm).'));
   }
   const meanRoomTemp = rooms.length > 0 ? rooms.reduce((s, r) => s + r.roomTemp_C.value!, 0) / rooms.length : 20;
-  const day = dayWeatherCase(survey, meanRoomTemp);
+  const dayOutdoor = ctx.dayOutdoor;
+  const day = dayWeatherCase(survey, meanRoomTemp, dayOutdoor.temp_C);
   return {
     stamps: { engineVersion: ENGINE_VERSION, formatVersion: CURRENT_FORMAT_VERSION, analysisVersion: ANALYSIS_VERSION, criteria: chosen.stamp },
     surveyId: survey.id,
     settings: { draws: ctx.draws, seed: ctx.seed, thresholds_ppm: [...ctx.thresholds_ppm], window_s: ctx.window_s },
     weatherCases: cases.map((c) => weatherCaseResult(c, source)),
     dayWeather: day ? weatherCaseResult(day, 'day-of-visit') : null,
+    dayOutdoor,
     outdoor: { value_ppm: outdoor.value_ppm, sd_ppm: outdoor.sd_ppm, readings: outdoor.readings, source: outdoor.source },
     rooms,
     areas,
@@ -303,7 +314,7 @@ export function judgeSurvey(figures: SurveyFigures): AnalysisResults {
 
 /**
  * Analyse a validated survey document (see the file note): surveyFigures, then judgeSurvey.
- * Example: analyseSurvey(doc, { draws: 200 }).stamps = { engineVersion: '0.2.0', formatVersion: 1, analysisVersion: '0.2.0', criteria: { setId: 'schools', version: 1, edits: [] } }.
+ * Example: analyseSurvey(doc, { draws: 200 }).stamps = { engineVersion: '0.2.0', formatVersion: 1, analysisVersion: '0.3.0', criteria: { setId: 'schools', version: 1, edits: [] } }.
  */
 export function analyseSurvey(doc: SurveyDocument, options: AnalysisOptions = {}): AnalysisResults {
   return judgeSurvey(surveyFigures(doc, options));

@@ -70,6 +70,8 @@ const CAUTIONS: ReadonlySet<string> = new Set<WarningCode | AirflowWarningCode>(
   'background-fit-unsettled',
   'outdoor-assumed',
   'outdoor-reading-unusual',
+  'outdoor-sources-disagree',
+  'outdoor-logger-outside-measurements',
   'not-steady',
   'history-unknown',
   'reading-at-or-below-outdoor',

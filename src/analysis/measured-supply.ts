@@ -42,6 +42,7 @@ import { analysisWarning, fromEngineWarning, uniqueWarnings, type AnalysisWarnin
 import { clockSeconds, firstOccupiedSlot, slotAt, type DayPlan } from './day-schedule.ts';
 import { seedFromIds } from './id-seed.ts';
 import { meterModel, outdoorFor } from './meter-inputs.ts';
+import type { OutdoorLoggerWindow } from './outdoor-logger-window.ts';
 import { OUTPUT_RELATIVE_SD, occupancyOf, presentCounts, type RoomOccupancy } from './occupancy-inputs.ts';
 import type { ReadingSet } from './reading-sets.ts';
 import type { MeasuredEstimate, OccupancyFigures, Ranged } from './results.ts';
@@ -71,6 +72,8 @@ export interface MeasurementContext {
   room: DocumentRoom;
   survey: Survey;
   instruments: readonly Instrument[];
+  /** The outdoor logger's points for the measurements (outdoor-logger-window.ts), or null. */
+  outdoorLogger: OutdoorLoggerWindow | null;
   volume_m3: number;
   air: AirState;
   asFound: RoomOccupancy;
@@ -97,7 +100,7 @@ export function measureSet(ctx: MeasurementContext, set: ReadingSet): { estimate
   const warnings: AnalysisWarning[] = [...set.warnings];
   const meter = meterModel(set.instrumentId, ctx.instruments);
   warnings.push(...meter.warnings);
-  const outdoor = outdoorFor(set.instrumentId, ctx.survey, ctx.instruments);
+  const outdoor = outdoorFor(set.instrumentId, ctx.survey, ctx.instruments, ctx.outdoorLogger);
   const state: RoomState | null = set.conditions ? stateFromConditions(room, set.conditions) : null;
   let people: RoomOccupancy = ctx.asFound;
   if (set.conditions) {

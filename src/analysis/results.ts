@@ -283,6 +283,20 @@ export interface WeatherCaseResult {
   source: 'survey' | 'screening' | 'day-of-visit';
 }
 
+/** One of the day's outdoor conditions (°C or %), with where it came from. */
+export interface DayOutdoorValue {
+  value: number;
+  basis: 'recorded' | 'outdoor-readings' | 'outdoor-logger';
+  /** Where it came from, in words ('median of the outdoor logger “roof.csv” from 08:40 to 16:10'). */
+  words: string;
+}
+
+/** The day's outdoor temperature and humidity; null when none was recorded (day-outdoor-conditions.ts). */
+export interface DayOutdoorConditions {
+  temp_C: DayOutdoorValue | null;
+  rh_pct: DayOutdoorValue | null;
+}
+
 export interface AnalysisStamps {
   engineVersion: string;
   formatVersion: number;
@@ -299,6 +313,8 @@ export interface AnalysisResults {
   weatherCases: WeatherCaseResult[];
   /** The weather of the visit as a case, for reconciliation; null when not recorded. */
   dayWeather: WeatherCaseResult | null;
+  /** The day's outdoor temperature and humidity, as recorded or else from readings or the outdoor logger. */
+  dayOutdoor: DayOutdoorConditions;
   outdoor: { value_ppm: number; sd_ppm: number; readings: number; source: string };
   rooms: RoomResults[];
   areas: AreaResults[];

@@ -3,7 +3,8 @@
  *
  * - Cases: the survey's stated design weather cases (indoor 20 °C, as the engine's screening
  *   cases), or else the engine's SCREENING_WEATHER_CASES. Both are assumptions, not observations.
- * - The visit: the recorded outdoor temperature (or the mean of the outdoor readings' temperatures)
+ * - The visit: the day's outdoor temperature (as recorded, else the outdoor readings' mean, else the
+ *   outdoor logger's median: day-outdoor-conditions.ts)
  *   and the recorded wind in words, turned into a 10 m wind speed by our reading of the Beaufort
  *   scale: calm 0.5, light 2.5, moderate 6.5, strong 12 m/s (common practice (no published
  *   source); from memory). Indoor: the room's own temperature. Used to reconcile measurements
@@ -13,7 +14,7 @@
  */
 import { SCREENING_WEATHER_CASES, type WeatherCase, type WeatherCases } from '../core/weather-cases.ts';
 import type { Survey } from '../model/survey.ts';
-import type { WeatherCaseResult } from './results.ts';
+import type { DayOutdoorValue, WeatherCaseResult } from './results.ts';
 
 /** Indoor temperature of the stated design cases, °C (as the engine's screening cases). */
 export const DESIGN_CASE_INDOOR_C = SCREENING_WEATHER_CASES[0].indoor_C;
@@ -43,17 +44,18 @@ export function weatherCases(survey: Survey): { cases: WeatherCases; source: 'su
 }
 
 /**
- * The visit's weather as a case at a room temperature (°C), or null when not recorded.
+ * The visit's weather as a case at a room temperature (°C), or null when not recorded. The
+ * outdoor temperature is the day's (day-outdoor-conditions.ts: as recorded, else the outdoor
+ * readings' mean, else the outdoor logger's median); the wind only as recorded.
  * Example: 4.5 °C outside, light wind, room at 20.4 °C → { outdoor_C: 4.5, windAt10m_ms: 2.5, indoor_C: 20.4 }.
  */
-export function dayWeatherCase(survey: Survey, indoor_C: number): WeatherCase | null {
-  const temps = survey.outdoorReadings.flatMap((r) => (r.temp_C === undefined ? [] : [r.temp_C]));
-  const outdoor = survey.weather.outdoorTemp_C ?? (temps.length > 0 ? temps.reduce((a, b) => a + b, 0) / temps.length : undefined);
+export function dayWeatherCase(survey: Survey, indoor_C: number, outdoorTemp: DayOutdoorValue | null): WeatherCase | null {
   const wind = survey.weather.wind;
-  if (outdoor === undefined || wind === undefined) return null;
+  if (outdoorTemp === null || wind === undefined) return null;
+  const outdoor = outdoorTemp.value;
   return {
     id: 'day-of-visit',
-    label: `the day of the visit (${outdoor.toFixed(1)} °C outside, ${wind} wind)`,
+    label: `the day of the visit (${outdoor.toFixed(1)} °C outside${outdoorTemp.basis === 'outdoor-logger' ? ' by the outdoor logger' : ''}, ${wind} wind)`,
     indoor_C,
     outdoor_C: outdoor,
     windAt10m_ms: WIND_IN_WORDS_MS[wind],

@@ -19,7 +19,7 @@ export interface AnalysisRequest {
 }
 
 /** Rooms' results per message. */
-export const ROOMS_PER_MESSAGE = 20;
+export const ROOMS_PER_MESSAGE = 10;
 
 const connection = new Connection();
 

@@ -21,6 +21,8 @@ export interface AttachLoggerInput {
   report: ImportReport;
   /** The room the logger stood in; absent for the outdoor logger. */
   roomId?: string;
+  /** The survey's instrument the logger is, when known. */
+  instrumentId?: string;
   accepted: readonly FittedPeriod[];
 }
 
@@ -33,6 +35,7 @@ export async function attachLoggerSeries(input: AttachLoggerInput, newId: () => 
     series: input.series,
     report: input.report,
     ...(input.roomId ? { roomId: input.roomId } : {}),
+    ...(input.instrumentId ? { instrumentId: input.instrumentId } : {}),
     periods: input.accepted.map((p) => ({ id: newId(), kind: p.kind, start_s: p.start_s, end_s: p.end_s, note: p.note.slice(0, 500) })),
   });
   if (!built.ok) return { ok: false, message: built.error.message };

@@ -1,5 +1,6 @@
 /**
- * One logger file being brought into a room, as runes state for the room screen: the file is
+ * One logger file being brought into a room (or kept as the outdoor logger, from the room screen
+ * or the visit screen's outdoor section), as runes state: the file is
  * read in the logger worker (its bytes transferred, the series' arrays transferred back), the
  * surveyor's changes (columns, date order, time zone) read it again, each period found is
  * accepted or rejected, and "save" keeps the series with the accepted periods through
@@ -34,9 +35,9 @@ export function deviceZone(): string | null {
   }
 }
 
-/** Facts about the room the fits need: its volume and the survey's outdoor level, when known. */
+/** Facts about the room the fits need: its volume and the survey's outdoor level, when known. No room: the outdoor logger. */
 export interface LoggerRoomFacts {
-  roomId: string;
+  roomId?: string;
   volume_m3?: number;
   outdoor_ppm?: number;
 }
@@ -56,6 +57,8 @@ export class LoggerImport {
   columns = $state<ColumnOverrides>({});
   /** The logger stood outdoors: keep it as the outdoor reference rather than with the room. */
   outdoor = $state(false);
+  /** The survey's instrument this logger is, when the surveyor says (its error model then applies); '' when not said. */
+  instrumentId = $state('');
   reading = $state(false);
   analysis = $state.raw<LoggerAnalysis | null>(null);
   /** The surveyor's decision on each period, by its index in the analysis. */
@@ -67,7 +70,13 @@ export class LoggerImport {
   /** The stored series' id once this file has been saved: saving again replaces it, never adds a second. */
   private savedId: string | undefined;
 
-  constructor(private readonly facts: () => LoggerRoomFacts) {}
+  /** `outdoor`: start with the outdoor choice made (the visit screen's outdoor logger). */
+  constructor(
+    private readonly facts: () => LoggerRoomFacts,
+    options: { outdoor?: boolean } = {},
+  ) {
+    this.outdoor = options.outdoor ?? false;
+  }
 
   /** A new file: forget the previous one's choices and read it. */
   async choose(file: File): Promise<void> {
@@ -158,6 +167,11 @@ export class LoggerImport {
   async save(): Promise<void> {
     const analysis = this.analysis;
     if (analysis?.status !== 'analysed' || !this.file) return;
+    const roomId = this.facts().roomId;
+    if (!this.outdoor && !roomId) {
+      this.saveError = 'Not saved: this logger has no room here; tick “This is the outdoor logger” or import it on its room.';
+      return;
+    }
     this.saving = true;
     this.saveError = null;
     const accepted = analysis.periods.filter((_, i) => this.decisions[i] === 'accepted');
@@ -166,7 +180,8 @@ export class LoggerImport {
       fileName: this.file.name,
       series: analysis.series,
       report: analysis.report,
-      ...(this.outdoor ? {} : { roomId: this.facts().roomId }),
+      ...(this.outdoor ? {} : { roomId }),
+      ...(this.instrumentId ? { instrumentId: this.instrumentId } : {}),
       accepted: this.outdoor ? [] : accepted,
     });
     this.saving = false;

@@ -22,7 +22,7 @@ import { duplicateRoom } from '../store/duplicate-room.ts';
 import { loadSurvey } from '../store/load-survey.ts';
 import { getPhotoBytes, listPhotos } from '../store/photos.ts';
 import { reorderRooms } from '../store/reorder-rooms.ts';
-import { deleteArea, deleteInstrument, deleteReading, deleteRoom } from '../store/remove-parts.ts';
+import { deleteArea, deleteInstrument, deleteReading, deleteRoom, deleteSeries } from '../store/remove-parts.ts';
 import { getSurvey } from '../store/surveys.ts';
 import { saveArea, saveInstrument, saveReading, saveRoom, saveSeries } from '../store/survey-parts.ts';
 import { addPhoto, type PhotoPlace } from './add-photo.ts';
@@ -303,6 +303,13 @@ class SurveyWalk {
     this.upsert(this.doc!.series, saved);
     this.analyse();
     return saved;
+  }
+
+  /** Remove a logger series (the outdoor logger, say); the findings follow. */
+  async removeSeries(seriesId: string, now = new Date()): Promise<void> {
+    await deleteSeries(connection, this.doc!.survey.id, seriesId, now.toISOString());
+    this.doc!.series = this.doc!.series.filter((s) => s.id !== seriesId);
+    this.analyse();
   }
 
   async addPhoto(file: Blob, place: Omit<PhotoPlace, 'surveyId'>): Promise<void> {

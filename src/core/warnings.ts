@@ -16,6 +16,8 @@ export type WarningCode =
   | 'background-fit-unsettled'
   | 'outdoor-assumed'
   | 'outdoor-reading-unusual'
+  | 'outdoor-sources-disagree'
+  | 'outdoor-logger-outside-measurements'
   | 'not-steady'
   | 'history-unknown'
   | 'reading-above-sealed-room'

@@ -2,14 +2,15 @@
  * The survey model's logger-series record (src/model/logger-series.ts) from a parsed file: the
  * source file name, the column map (names as written), the time zone, times in ms, values in
  * ppm, °C and %, and the periods the surveyor accepted. Readings the model would refuse (a gap
- * in any kept column, a value outside the model's range) are left out and counted, so the record
+ * in any kept column, a value outside the model's range: the outdoor temperature range for the
+ * outdoor logger, no room) are left out and counted, so the record
  * always passes the model's schema; more points than the model holds is an error.
  *
  * Example: a parsed file of 3 readings with CO2 [812, NaN, 815] → times_ms of the 1st and 3rd
  * readings, co2_ppm [812, 815], left out 1.
  */
-import { acceptedPeriodSchema, MAX_SERIES_POINTS, type LoggerSeries } from '../model/logger-series.ts';
-import { co2Ppm, indoorTempC, relativeHumidity } from '../model/field-rules.ts';
+import { acceptedPeriodSchema, MAX_SERIES_POINTS, temperatureRuleFor, type LoggerSeries } from '../model/logger-series.ts';
+import { co2Ppm, relativeHumidity } from '../model/field-rules.ts';
 import { ingestWarning, type IngestWarning } from './ingest-warnings.ts';
 import type { ImportReport, LoggerSeriesData } from './parse-logger-file.ts';
 import type { PeriodKind } from './period-finding.ts';
@@ -48,7 +49,7 @@ export function loggerSeriesRecord(input: LoggerSeriesRecordInput): LoggerSeries
   const time = choice.time.kind === 'single' ? nameOf(choice.time.column)! : `${nameOf(choice.time.date)} + ${nameOf(choice.time.time)}`;
   const channels = [
     [series.co2_ppm, co2Ppm],
-    [series.temp_C, indoorTempC],
+    [series.temp_C, temperatureRuleFor(input.roomId || undefined)],
     [series.rh_pct, relativeHumidity],
   ] as const;
   const keep: number[] = [];

@@ -5,7 +5,7 @@
  * numbers; on the device they may be kept as Float64Array.
  */
 import { z } from 'zod';
-import { MAX_NOTE_LENGTH, choice, co2Ppm, indoorTempC, recordId, relativeHumidity, requiredText, text } from './field-rules.ts';
+import { MAX_NOTE_LENGTH, choice, co2Ppm, indoorTempC, measure, outdoorTempC, recordId, relativeHumidity, requiredText, text } from './field-rules.ts';
 
 /** Earliest and latest logger time accepted: 2000-01-01 and 2200-01-01 UTC, in ms. */
 export const EARLIEST_LOGGER_TIME_MS = Date.UTC(2000, 0, 1);
@@ -37,6 +37,23 @@ export const columnMapSchema = z.strictObject({
   relativeHumidity: text('Humidity column').optional(),
 });
 
+/**
+ * The temperature rule for a logger's place: the indoor range in a room, the outdoor range for
+ * the outdoor logger (no room), so an outdoor logger on a hard winter night is kept.
+ * Example: temperatureRuleFor(undefined).safeParse(-35).success = true; temperatureRuleFor('r1') refuses it.
+ */
+export function temperatureRuleFor(roomId: string | undefined): typeof indoorTempC {
+  return roomId === undefined ? outdoorTempC : indoorTempC;
+}
+
+/** Any temperature a logger indoors or outdoors may hold, °C; the place's own range is checked after. */
+const anyLoggerTempC = measure(
+  'Logger temperature',
+  '°C',
+  Math.min(indoorTempC.minValue!, outdoorTempC.minValue!),
+  Math.max(indoorTempC.maxValue!, outdoorTempC.maxValue!),
+);
+
 const points = (item: z.ZodNumber) =>
   z.array(item).max(MAX_SERIES_POINTS, { error: `A logger series holds at most ${MAX_SERIES_POINTS} points` });
 
@@ -52,7 +69,8 @@ export const loggerSeriesSchema = z
     timeZone: requiredText('Time zone'),
     times_ms: points(loggerTime).min(1, { error: 'A logger series needs at least one time' }),
     co2_ppm: points(co2Ppm).optional(),
-    temp_C: points(indoorTempC).optional(),
+    /** °C; the indoor range in a room, the outdoor range for the outdoor logger (temperatureRuleFor). */
+    temp_C: points(anyLoggerTempC).optional(),
     rh_pct: points(relativeHumidity).optional(),
     periods: z.array(acceptedPeriodSchema),
   })
@@ -65,6 +83,20 @@ export const loggerSeriesSchema = z
           path: [key],
           input: values.length,
           message: `has ${values.length} values for ${s.times_ms.length} times: each time needs one value`,
+        });
+      }
+    }
+    if (s.temp_C) {
+      // One message for the first point outside the place's range (a file may hold thousands).
+      const rule = temperatureRuleFor(s.roomId);
+      const bad = s.temp_C.findIndex((t) => !rule.safeParse(t).success);
+      if (bad >= 0) {
+        const problem = rule.safeParse(s.temp_C[bad]);
+        ctx.addIssue({
+          code: 'custom',
+          path: ['temp_C', bad],
+          input: s.temp_C[bad],
+          message: `${problem.error?.issues[0]?.message ?? 'Temperature is out of range'}${s.roomId === undefined ? ' (an outdoor logger)' : ' (a logger in a room)'}`,
         });
       }
     }

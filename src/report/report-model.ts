@@ -18,7 +18,7 @@ import type { ChartLimit, ChartPeriod, ChartSeries } from '../chart/time-chart.t
 import { buildingUseLabel } from '../core/building-uses.ts';
 import type { SurveyDocument } from '../model/survey-document.ts';
 import { judgementView, type ReportJudgementView, type ReportPriority, type ReportUrgency } from './judgement-view.ts';
-import { displayNumber, type ReportFigure } from './report-figure.ts';
+import { displayNumber, numberText, type ReportFigure } from './report-figure.ts';
 import { CAUTIONS, FACTS_AND_OPINIONS, INDEPENDENCE, LIMITATIONS, NON_INTRUSIVE, SCREENING_NOTE } from './report-cautions.ts';
 import { recordedClock, recordedDate, recordedDateTime, recordedZone } from './recorded-time.ts';
 import { rankRooms } from './room-ranking.ts';
@@ -173,7 +173,11 @@ export interface ReportModel {
   appendix: { readings: { room: string; rows: string[][] }[]; outdoor: string[][]; loggers: ReportChart[] };
 }
 
-function weatherLines(doc: SurveyDocument): string[] {
+/**
+ * The day's weather as the surveyor recorded it; a temperature or humidity not typed in but
+ * logged outdoors is added, saying it came from the outdoor logger (day-outdoor-conditions.ts).
+ */
+function weatherLines(doc: SurveyDocument, results: AnalysisResults): string[] {
   const w = doc.survey.weather;
   const lines: string[] = [];
   if (w.conditions) lines.push(w.conditions);
@@ -184,6 +188,12 @@ function weatherLines(doc: SurveyDocument): string[] {
     w.rainInPreviousDays === undefined ? '' : w.rainInPreviousDays ? 'rain in the previous days' : 'no rain in the previous days',
   ].filter(Boolean);
   if (facts.length) lines.push(`${facts.join(', ')}.`);
+  const { temp_C, rh_pct } = results.dayOutdoor;
+  const logged = [
+    w.outdoorTemp_C === undefined && temp_C?.basis === 'outdoor-logger' ? { text: `outdoor ${numberText(displayNumber(temp_C.value, 'temperature')!)} °C`, words: temp_C.words } : null,
+    w.outdoorRh_pct === undefined && rh_pct?.basis === 'outdoor-logger' ? { text: `${numberText(displayNumber(rh_pct.value, 'relativeHumidity')!)} % relative humidity`, words: rh_pct.words } : null,
+  ].filter((x) => x !== null);
+  if (logged.length) lines.push(`Not recorded by the surveyor; logged: ${logged.map((x) => `${x.text} (${x.words})`).join(', ')}.`);
   return lines.length ? lines : ['Not recorded.'];
 }
 
@@ -229,9 +239,9 @@ export function buildReport(doc: SurveyDocument, results: AnalysisResults, optio
       method: NON_INTRUSIVE,
       visits: survey.visits.map((v) => (v.end ? `${recordedDate(v.start)}, ${recordedClock(v.start)} to ${recordedClock(v.end)}${recordedZone(v.start) ? ` ${recordedZone(v.start)}` : ''}` : `${recordedDateTime(v.start)} (end not recorded)`)),
       surveyors: survey.surveyors.map((s) => (s.qualifications ? `${s.name}, ${s.qualifications}` : s.name)),
-      weather: weatherLines(doc),
+      weather: weatherLines(doc, results),
       occupancy,
-      outdoor: `Outdoor CO2 used: ${displayNumber(results.outdoor.value_ppm, 'co2')} ppm (±${displayNumber(results.outdoor.sd_ppm, 'co2')} ppm, one standard deviation) from ${results.outdoor.readings} reading${results.outdoor.readings === 1 ? '' : 's'}; ${results.outdoor.source}.`,
+      outdoor: `Outdoor CO2 used: ${displayNumber(results.outdoor.value_ppm, 'co2')} ppm (±${displayNumber(results.outdoor.sd_ppm, 'co2')} ppm, one standard deviation): ${results.outdoor.source}.`,
     },
     summary: summaryOf(doc, results, ranked.rows, judgement, SCREENING_NOTE),
     sinceLastVisit: options.previousVisit ? sinceLastVisitSection(options.previousVisit) : null,

@@ -1,9 +1,10 @@
 /**
  * Removing what was entered by mistake: a room (with its readings, photos and logger series; a
  * whole-dwelling terminal that served it keeps its place as a location), one reading (taken out
- * of any test that grouped it; a test left with fewer than two readings goes too), or an area
- * (its rooms and inner areas move to the area it sat in, or to no area: area-removal.ts), or an
- * instrument nothing refers to (instrument-uses.ts). One transaction each, strict durability, saved only after `tx.done`; like any edit,
+ * of any test that grouped it; a test left with fewer than two readings goes too), one logger
+ * series (the outdoor logger's, say), an area (its rooms and inner areas move to the area it sat
+ * in, or to no area: area-removal.ts), or an instrument nothing refers to (instrument-uses.ts).
+ * One transaction each, strict durability, saved only after `tx.done`; like any edit,
  * it moves an issued revision on to the next and the survey's last change to `changedAt`.
  */
 import type { IDBPTransaction } from 'idb';
@@ -113,6 +114,16 @@ export async function deleteInstrument(connection: Connection, surveyId: string,
     const uses = instrumentUseWords(instrumentUses({ outdoorReadings: survey?.outdoorReadings ?? [], instruments, readings, rooms, areas, series }, instrumentId));
     if (uses) return `${instrument.model} is still named by ${uses}: it stays`;
     queue(tx.objectStore('instruments').delete(instrumentId));
+    return undefined;
+  });
+}
+
+/** Delete one logger series of a survey (a room's, or the outdoor logger). */
+export async function deleteSeries(connection: Connection, surveyId: string, seriesId: string, changedAt: string): Promise<void> {
+  await removeIn(connection, ['series'], surveyId, changedAt, async (tx) => {
+    const series = await tx.objectStore('series').get(seriesId);
+    if (series?.surveyId !== surveyId) return 'This logger file is not in the survey';
+    queue(tx.objectStore('series').delete(seriesId));
     return undefined;
   });
 }

@@ -73,7 +73,7 @@ describe('analyseSurvey on the demo file', () => {
   });
 
   it('stamps the engine, format, analysis and criteria versions', () => {
-    expect(results[0]!.stamps).toEqual({ engineVersion: ENGINE_VERSION, formatVersion: CURRENT_FORMAT_VERSION, analysisVersion: '0.2.0', criteria: { setId: 'schools', version: CRITERIA_DATA_VERSION, edits: [] } });
+    expect(results[0]!.stamps).toEqual({ engineVersion: ENGINE_VERSION, formatVersion: CURRENT_FORMAT_VERSION, analysisVersion: '0.3.0', criteria: { setId: 'schools', version: CRITERIA_DATA_VERSION, edits: [] } });
     expect(results[0]!.judgement.ranking).toHaveLength(results[0]!.rooms.length);
   });
 

@@ -40,6 +40,16 @@ describe('the model record', () => {
     expect(built.ok && built.leftOut).toBe(2);
     expect(built.ok && loggerSeriesSchema.safeParse(built.record).success).toBe(true);
   });
+  it('keeps an outdoor logger’s winter temperatures that a room’s logger could not hold', () => {
+    // −35 °C outdoors is within the outdoor range (−50 to 50 °C), outside the indoor one (−30 to 60 °C).
+    const temp = Float64Array.from(analysis.series.temp_C!, () => -35);
+    const series = { ...analysis.series, temp_C: temp };
+    const outdoor = loggerSeriesRecord({ id: '11111111-1111-4111-8111-111111111111', sourceFile: 'roof.csv', series, report: analysis.report });
+    expect(outdoor.ok && outdoor.leftOut).toBe(0);
+    expect(outdoor.ok && loggerSeriesSchema.safeParse(outdoor.record).success).toBe(true);
+    const inRoom = loggerSeriesRecord({ id: '11111111-1111-4111-8111-111111111111', sourceFile: 'room.csv', series, report: analysis.report, roomId: '22222222-2222-4222-8222-222222222222' });
+    expect(inRoom.ok && inRoom.leftOut).toBe(series.times_s.length);
+  });
 });
 
 describe('vapour-pressure excess by local day', () => {

@@ -1,5 +1,5 @@
 /**
- * Removing a room, a reading or an area entered by mistake: everything of the room goes in one
+ * Removing a room, a reading, a logger series or an area entered by mistake: everything of the room goes in one
  * transaction (a terminal that served it keeps its name as the location), a removed reading
  * leaves the tests that grouped it, a removed area's rooms and inner areas move to the area it
  * sat in (or to no area), and a refusal changes nothing.
@@ -7,8 +7,8 @@
 import { describe, it, expect, afterEach } from 'vitest';
 import { importSurveys } from '../../src/store/backup.ts';
 import { loadSurvey } from '../../src/store/load-survey.ts';
-import { deleteArea, deleteInstrument, deleteReading, deleteRoom } from '../../src/store/remove-parts.ts';
-import { instrumentUseWords, instrumentUses } from '../../src/model/instrument-uses.ts';
+import { deleteArea, deleteInstrument, deleteReading, deleteRoom, deleteSeries } from '../../src/store/remove-parts.ts';
+import { instrumentUses, instrumentUseWords } from '../../src/model/instrument-uses.ts';
 import { surveyDocumentSchema } from '../../src/model/survey-document.ts';
 import type { SurveyDocument } from '../../src/model/survey-document.ts';
 import { closeAll, dumpAll, freshConnection, testIds } from '../support/store-helpers.ts';
@@ -112,12 +112,24 @@ describe('removing parts of a survey', () => {
     expect(surveyDocumentSchema.safeParse(loaded).success).toBe(true);
   });
 
+  it('removes one logger series and nothing else', async () => {
+    const { connection, survey } = await school();
+    const series = survey.series[0]!;
+    await deleteSeries(connection, survey.survey.id, series.id, '2026-04-20T08:00:00Z');
+    const loaded = (await loadSurvey(connection, survey.survey.id, { photos: false }))!;
+    expect(loaded.series).toEqual([]);
+    expect(loaded.rooms.map((r) => r.id)).toEqual(survey.rooms.map((r) => r.id));
+    expect(loaded.rooms.flatMap((r) => r.readings).length).toBe(survey.rooms.flatMap((r) => r.readings).length);
+    expect(loaded.survey.updatedAt).toBe('2026-04-20T08:00:00Z');
+  });
+
   it('changes nothing when the room, reading or area is not in the survey', async () => {
     const { connection, survey } = await school();
     const before = await dumpAll(connection);
     await expect(deleteRoom(connection, survey.survey.id, 'f0000000-0000-4000-8000-000000000000', '2026-04-20T08:00:00Z')).rejects.toThrow(/not in the survey/);
     await expect(deleteReading(connection, survey.survey.id, 'f0000000-0000-4000-8000-000000000000', '2026-04-20T08:00:00Z')).rejects.toThrow(/not in the survey/);
     await expect(deleteArea(connection, survey.survey.id, 'f0000000-0000-4000-8000-000000000000', '2026-04-20T08:00:00Z')).rejects.toThrow(/not in the survey/);
+    await expect(deleteSeries(connection, survey.survey.id, 'f0000000-0000-4000-8000-000000000000', '2026-04-20T08:00:00Z')).rejects.toThrow(/not in the survey/);
     expect(await dumpAll(connection)).toEqual(before);
   });
 
