@@ -162,6 +162,24 @@ describe.skipIf(!baseURL)('the area screen in Chromium (phone)', () => {
     expect(page.url()).toBe(here);
   });
 
+  it('moves a room to another area from the room screen, and back', async () => {
+    const flat = page.url();
+    await page.goto(flat.replace(/\/area\/.*$/, ''));
+    const inArea = (area: string) => page.locator('section').filter({ has: page.getByRole('heading', { name: area, exact: true }) });
+    await inArea('Flat 12').getByRole('link', { name: 'Bedroom 1' }).click();
+    await page.getByLabel('In area').selectOption({ label: 'First floor' });
+    await saved();
+    await page.getByRole('link', { name: `← ${TITLE}` }).click();
+    await inArea('First floor').getByRole('link', { name: 'Bedroom 1' }).waitFor();
+    await expect(inArea('Flat 12').getByRole('link', { name: 'Bedroom 1' }).count()).resolves.toBe(0);
+    await inArea('First floor').getByRole('link', { name: 'Bedroom 1' }).click();
+    await expect(page.getByLabel('In area').inputValue()).resolves.not.toBe('');
+    await page.getByLabel('In area').selectOption({ label: 'Flat 12' });
+    await saved();
+    await page.goto(flat);
+    await page.getByRole('heading', { name: 'Flat 12', level: 1 }).waitFor();
+  });
+
   it('removes the flat: the screen says where its room goes, and it goes there', async () => {
     await page.getByText('Its 1 room(s) move to First floor, with their readings, photos and logger files. Its dwelling facts and system go with it.').waitFor();
     await page.getByRole('button', { name: 'Remove this area' }).click();
