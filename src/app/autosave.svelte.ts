@@ -65,6 +65,17 @@ export class Autosave<T> {
     this.holdUnsaved();
   }
 
+  /**
+   * Part of the input breaks a rule: save its valid part (`value`) as usual, but keep saying NOT
+   * SAVED with `message` for the rest until the input is put right (the next `edit`).
+   */
+  editPartly(value: T, message: string): void {
+    this.edit(value);
+    this.refused = true;
+    this.state = 'failed';
+    this.error = message;
+  }
+
   /** Save what is pending now; resolves once it is saved or has failed. */
   async flush(): Promise<void> {
     clearTimeout(this.timer);
@@ -72,7 +83,8 @@ export class Autosave<T> {
     if (!this.dirty) return;
     const value = this.latest as T;
     this.dirty = false;
-    this.state = 'saving';
+    // A partial save (editPartly) runs quietly under its NOT SAVED message.
+    if (!this.refused) this.state = 'saving';
     this.running = this.options.save(value).then(
       () => {
         this.savedAt = (this.options.now ?? (() => new Date()))();

@@ -7,7 +7,7 @@
  * records — and once a save has landed the analysis is asked to run again (on the survey as
  * stored). Removing an area moves its rooms to the area it sat in (area-removal.ts).
  */
-import type { Area } from '../model/area.ts';
+import { areaSchema, type Area } from '../model/area.ts';
 import { areaRemovalPlan, movedTo } from '../model/area-removal.ts';
 import { withoutTerminalRoom } from '../model/terminal-room-removal.ts';
 import type { Instrument } from '../model/instrument.ts';
@@ -15,6 +15,7 @@ import type { LoggerSeries } from '../model/logger-series.ts';
 import type { Photo } from '../model/photo.ts';
 import type { Reading } from '../model/reading.ts';
 import { roomSchema, type Room } from '../model/room.ts';
+import { validPart } from '../model/valid-part.ts';
 import { surveySchema } from '../model/survey.ts';
 import type { DocumentRoom, SurveyDocument } from '../model/survey-document.ts';
 import { validationProblems, type ValidationProblem } from '../model/validation-problem.ts';
@@ -47,6 +48,12 @@ class SurveyWalk {
   private patch: SurveyPatch = {};
   private readonly roomSaves = new Map<string, Autosave<Room>>();
   private readonly areaSaves = new Map<string, Autosave<Area>>();
+  /**
+   * Each room's and area's last version that passed its schema: when an edit breaks a rule in one
+   * field, its valid part (valid-part.ts) is saved against it, so the rest is not lost.
+   */
+  private readonly lastValidRooms = new Map<string, Room>();
+  private readonly lastValidAreas = new Map<string, Area>();
   readonly header = new Autosave<SurveyPatch>({
     form: 'survey header',
     save: async (patch) => {
@@ -72,6 +79,7 @@ class SurveyWalk {
       }
       this.analysis.request(surveyId, 0);
       this.doc = doc;
+      this.knowValid(doc);
       knowHeader(doc.survey);
       this.photos = photos;
     } catch (error) {
@@ -97,8 +105,17 @@ class SurveyWalk {
     const doc = await loadSurvey(connection, surveyId, { photos: false });
     if (!doc || this.doc?.survey.id !== surveyId) return;
     this.doc = doc;
+    this.knowValid(doc);
     knowHeader(doc.survey);
     this.analyse();
+  }
+
+  /** Remember a survey's rooms and areas as stored (so as checked) as their last valid versions. */
+  private knowValid(doc: SurveyDocument): void {
+    this.lastValidRooms.clear();
+    this.lastValidAreas.clear();
+    for (const { readings: _readings, ...room } of doc.rooms) this.lastValidRooms.set(room.id, structuredClone(room));
+    for (const area of doc.areas) this.lastValidAreas.set(area.id, structuredClone(area));
   }
 
   async flushAll(): Promise<void> {
@@ -157,10 +174,15 @@ class SurveyWalk {
     if (!parsed.success) {
       const problems = validationProblems(parsed.error);
       this.roomProblems[roomId] = problems;
-      this.roomSave(roomId).refuse(problems.map((p) => p.message).join('; '));
+      const message = problems.map((p) => p.message).join('; ');
+      const last = this.lastValidRooms.get(roomId);
+      const kept = last && validPart(roomSchema, record, last);
+      if (kept) this.roomSave(roomId).editPartly(kept, `${message}. Everything else in this room is saved.`);
+      else this.roomSave(roomId).refuse(message);
       return;
     }
     this.roomProblems[roomId] = [];
+    this.lastValidRooms.set(roomId, parsed.data);
     this.roomSave(roomId).edit(parsed.data);
   }
 
@@ -177,13 +199,19 @@ class SurveyWalk {
   areaChanged(areaId: string): void {
     const area = this.area(areaId);
     if (!area) return;
-    const checked = checkArea($state.snapshot(area) as Area);
+    const edited = $state.snapshot(area) as Area;
+    const checked = checkArea(edited);
     if (!checked.ok) {
       this.areaProblems[areaId] = checked.problems;
-      this.areaSave(areaId).refuse(checked.problems.map((p) => p.message).join('; '));
+      const message = checked.problems.map((p) => p.message).join('; ');
+      const last = this.lastValidAreas.get(areaId);
+      const kept = last && validPart(areaSchema, edited, last);
+      if (kept) this.areaSave(areaId).editPartly(kept, `${message}. Everything else in this area is saved.`);
+      else this.areaSave(areaId).refuse(message);
       return;
     }
     this.areaProblems[areaId] = [];
+    this.lastValidAreas.set(areaId, checked.area);
     this.areaSave(areaId).edit(checked.area);
   }
 
@@ -214,6 +242,7 @@ class SurveyWalk {
   /** Save a new room (already complete and valid) last in the survey. */
   async addRoom(room: Room): Promise<DocumentRoom> {
     const saved = await saveRoom(connection, this.doc!.survey.id, room);
+    this.lastValidRooms.set(saved.id, structuredClone(saved));
     const added = { ...saved, readings: [] };
     this.doc!.rooms.push(added);
     this.analyse();
@@ -224,6 +253,7 @@ class SurveyWalk {
   async duplicate(roomId: string, now = new Date()): Promise<DocumentRoom> {
     await this.roomSave(roomId).flush();
     const copy = await duplicateRoom(connection, roomId, () => crypto.randomUUID(), now.toISOString());
+    this.lastValidRooms.set(copy.id, structuredClone(copy));
     const added = { ...copy, readings: [] };
     this.doc!.rooms.push(added);
     this.analyse();
@@ -271,6 +301,7 @@ class SurveyWalk {
 
   async saveArea(area: Area, now = new Date()): Promise<void> {
     const saved = await saveArea(connection, this.doc!.survey.id, $state.snapshot(area) as Area, now.toISOString());
+    this.lastValidAreas.set(saved.id, structuredClone(saved));
     this.upsert(this.doc!.areas, saved);
     this.analyse();
   }

@@ -118,6 +118,22 @@ describe('autosave', () => {
     expect(autosave.error).toBeNull();
   });
 
+  it('saves the valid part of input that breaks a rule, and still says NOT SAVED for the rest', async () => {
+    const { autosave, saved } = recorder();
+    autosave.editPartly('room renamed, old height', 'Height must be between 1.5 and 10 m; the rest of this room is saved.');
+    expect(autosave.state).toBe('failed');
+    await vi.advanceTimersByTimeAsync(400);
+    expect(saved).toEqual(['room renamed, old height']);
+    expect(autosave.state).toBe('failed');
+    expect(autosave.error).toMatch(/^Height must be between/);
+    expect(unsavedInput.forms).toContain('test form');
+    autosave.edit('room renamed, height put right');
+    await autosave.flush();
+    expect(saved.at(-1)).toBe('room renamed, height put right');
+    expect(autosave.state).toBe('saved');
+    expect(autosave.error).toBeNull();
+  });
+
   it('lets refused input go when its form closes, but keeps a failed save of valid input', async () => {
     const { autosave, failWith } = recorder();
     autosave.refuse('Survey title is empty: give the survey a name');

@@ -186,6 +186,22 @@ describe.skipIf(!baseURL)('editing a room in Chromium (phone)', () => {
     await page.getByRole('link', { name: '← Back to Classroom E4' }).click();
   });
 
+  it('saves everything else while one field breaks its rule, and keeps the typed text on screen', async () => {
+    const activity = page.getByLabel(/^Activity/).first();
+    const before = await activity.inputValue();
+    await activity.fill('9');
+    await page.getByLabel('Room name').fill('Classroom E4 (north)');
+    const status = page.getByTestId('save-status');
+    await status.getByText(/Activity must be between .*Everything else in this room is saved\./).waitFor();
+    await expect(activity.inputValue()).resolves.toBe('9');
+    await page.waitForTimeout(800); // the valid part's save lands quietly
+    await page.reload();
+    await page.getByRole('heading', { name: 'Classroom E4 (north)', exact: true }).waitFor();
+    await expect(page.getByLabel(/^Activity/).first().inputValue()).resolves.toBe(before);
+    await page.getByLabel('Room name').fill('Classroom E4');
+    await saved();
+  });
+
   it('is clean for axe with the own day, the parts and a correction open, and fits a 360 px phone', async () => {
     await page.getByRole('button', { name: 'Correct the 09:20 reading' }).click();
     expect(await axeViolations(page)).toEqual([]);
