@@ -63,15 +63,18 @@ describe.skipIf(!baseURL)('demo surveys in Chromium (phone)', () => {
     });
   }
 
-  it('has no WCAG 2 A/AA violations on the start of visit, settings and guided test screens', async () => {
+  it('has no WCAG 2 A/AA violations on the start of visit, settings, guided test and area screens', async () => {
     const doc = demo.surveys[0]!;
-    for (const [path, heading] of [
-      ['visit', 'Start of visit'],
-      ['details', 'Survey details'],
-      [`room/${doc.rooms[0]!.id}/test/decay`, `Decay test: ${doc.rooms[0]!.name}`],
+    const homes = demo.surveys.find((s) => s.areas.some((a) => a.dwelling))!;
+    const flat = homes.areas.find((a) => a.dwelling)!;
+    for (const [survey, path, heading] of [
+      [doc, 'visit', 'Start of visit'],
+      [doc, 'details', 'Survey details'],
+      [doc, `room/${doc.rooms[0]!.id}/test/decay`, `Decay test: ${doc.rooms[0]!.name}`],
+      [homes, `area/${flat.id}`, flat.name],
     ] as const) {
-      await page.goto(`${baseURL}#/survey/${doc.survey.id}/${path}`);
-      await page.getByRole('heading', { name: heading }).waitFor();
+      await page.goto(`${baseURL}#/survey/${survey.survey.id}/${path}`);
+      await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
       expect(await axeViolations(page), path).toEqual([]);
     }
   });
