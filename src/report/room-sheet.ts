@@ -130,7 +130,7 @@ function dayChart(doc: SurveyDocument, room: DocumentRoom, results: AnalysisResu
     periods = curve.inUse.map((p) => ({ from_s: p.from_s, to_s: p.to_s, label: p.label || 'in use' }));
     const weather = results.weatherCases.find((w) => w.id === asFound!.weatherId)?.label;
     const peak = (levels: number[]) => numberText(displayNumber(Math.max(...levels), 'co2') ?? 0);
-    captionStart = `CO2 over the day as predicted from ${asFound!.schedule}${weather ? ` (${weather})` : ''}, a screening estimate: solid line at the low end of the supply (highest ${peak(curve.unfavourable_ppm)} ppm), dashed at the high end (highest ${peak(curve.favourable_ppm)} ppm); shaded: in use`;
+    captionStart = `CO2 over the day as predicted from ${asFound!.schedule}${weather ? ` (${weather})` : ''}, a screening estimate: solid line at the low end of the supply (highest ${peak(curve.unfavourable_ppm)} ppm), dotted at the high end (highest ${peak(curve.favourable_ppm)} ppm); shaded: in use`;
     const all = [...curve.time_s, ...times];
     timeRange_s = [Math.min(...all), Math.max(...all)];
   } else {

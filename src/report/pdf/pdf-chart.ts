@@ -2,7 +2,8 @@
  * Draw a report chart as vectors: the shared geometry of src/chart/time-chart.ts (the same the
  * screens draw as SVG) turned into jspdf lines, text and rectangles. Limits are dashed and
  * labelled in words, scheduled periods shaded light grey and named, readings drawn as a line or
- * as small squares; the axes carry their units. Readable in black and white.
+ * as small squares, a second line (the other end of a predicted range) dotted so it is not taken
+ * for a limit; the axes carry their units. Readable in black and white.
  */
 import { timeChart } from '../../chart/time-chart.ts';
 import type { ReportChart } from '../report-model.ts';
@@ -65,7 +66,10 @@ export function drawChart(w: PdfWriter, chart: ReportChart, height = CHART_HEIGH
   doc.setLineDashPattern([], 0);
   doc.setLineWidth(1.1);
   w.colour(INK, 'fill');
+  let lines = 0;
   for (const s of g.series) {
+    const dotted = s.style !== 'points' && lines++ > 0;
+    doc.setLineDashPattern(dotted ? [1, 1.8] : [], 0);
     for (const seg of s.segments) {
       if (s.style === 'points' || seg.length === 1) {
         for (const p of seg) doc.rect(ox + p.x - 1.6, oy + p.y - 1.6, 3.2, 3.2, 'F');
@@ -81,6 +85,7 @@ export function drawChart(w: PdfWriter, chart: ReportChart, height = CHART_HEIGH
       }
     }
   }
+  doc.setLineDashPattern([], 0);
   doc.setLineWidth(0.4);
   w.y = oy + height + 2;
   w.paragraph(chart.caption, { size: TYPE.small, colour: MUTED });
