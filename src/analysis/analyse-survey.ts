@@ -27,7 +27,7 @@ import { dayPlan } from './day-schedule.ts';
 import { bestMeasured, measureSet } from './measured-supply.ts';
 import { outdoorFor } from './meter-inputs.ts';
 import { dayOutdoorConditions } from './day-outdoor-conditions.ts';
-import { outdoorLoggerWindow, type OutdoorLoggerWindow } from './outdoor-logger-window.ts';
+import { outdoorLoggerAround, outdoorLoggerWindow, type OutdoorLoggerWindow } from './outdoor-logger-window.ts';
 import { asFoundCounts, designCounts, occupancyOf, roomAir, roomTemperature } from './occupancy-inputs.ts';
 import { readingSets } from './reading-sets.ts';
 import { reconcile } from './reconcile.ts';
@@ -110,7 +110,19 @@ function analyseRoom(room: DocumentRoom, ctx: SurveyContext): AnalysedRoom {
 
   // Measured supply.
   const sets = readingSets(room, doc);
-  const measurementContext = { room, survey: doc.survey, instruments: doc.instruments, outdoorLogger: ctx.outdoorLogger, volume_m3: volume, air, asFound, plan, draws: ctx.draws, seed: ctx.seed };
+  const measurementContext = {
+    room,
+    survey: doc.survey,
+    instruments: doc.instruments,
+    outdoorLogger: ctx.outdoorLogger,
+    outdoorLoggerAround: (from_ms: number, to_ms: number) => outdoorLoggerAround(doc, from_ms, to_ms),
+    volume_m3: volume,
+    air,
+    asFound,
+    plan,
+    draws: ctx.draws,
+    seed: ctx.seed,
+  };
   const evaluated = sets.map((set) => measureSet(measurementContext, set));
   const measured = evaluated.flatMap((e) => e.estimates);
   for (const e of evaluated) if (e.estimates.length === 0) warnings.push(...e.warnings);

@@ -74,6 +74,8 @@ export interface MeasurementContext {
   instruments: readonly Instrument[];
   /** The outdoor logger's points for the measurements (outdoor-logger-window.ts), or null. */
   outdoorLogger: OutdoorLoggerWindow | null;
+  /** Its points around one measurement (ms since 1970), or null when too few were logged then. */
+  outdoorLoggerAround: (from_ms: number, to_ms: number) => OutdoorLoggerWindow | null;
   volume_m3: number;
   air: AirState;
   asFound: RoomOccupancy;
@@ -100,7 +102,11 @@ export function measureSet(ctx: MeasurementContext, set: ReadingSet): { estimate
   const warnings: AnalysisWarning[] = [...set.warnings];
   const meter = meterModel(set.instrumentId, ctx.instruments);
   warnings.push(...meter.warnings);
-  const outdoor = outdoorFor(set.instrumentId, ctx.survey, ctx.instruments, ctx.outdoorLogger);
+  // An outdoor logger gives the level the room drew while this set was measured, when it ran then.
+  const first = set.readings[0];
+  const last = set.readings[set.readings.length - 1];
+  const around = ctx.outdoorLogger && first && last ? ctx.outdoorLoggerAround(first.time_s * 1000, last.time_s * 1000) : null;
+  const outdoor = outdoorFor(set.instrumentId, ctx.survey, ctx.instruments, around ?? ctx.outdoorLogger);
   const state: RoomState | null = set.conditions ? stateFromConditions(room, set.conditions) : null;
   let people: RoomOccupancy = ctx.asFound;
   if (set.conditions) {

@@ -8,6 +8,10 @@
  *   periods of loggers in rooms), widened by 30 minutes each side, so the outdoor air the rooms
  *   drew just before and the outdoor checks at the start and end fall inside (common practice (no
  *   published source)). No room measurement yet: the recorded visits (start to end).
+ * - For one measurement (a decay, a build-up): the points from 15 minutes before its first reading
+ *   to 15 minutes after its last, so the level is the one the room drew while it was measured —
+ *   outdoor CO2 moves through a day (traffic, the morning's still air) (common practice (no
+ *   published source)); fewer than 5 points there: the survey-wide window stands.
  * - Several outdoor loggers with the channel: the one with most points in the span (then the smaller id).
  * - Fewer than 5 points in the span (the logger was not running then): its whole record, marked
  *   so; the outdoor level then prefers spot readings when there are any, and warns.
@@ -21,6 +25,8 @@ import type { SurveyDocument } from '../model/survey-document.ts';
 
 /** Margin either side of the room measurements, ms (see the file note). */
 export const OUTDOOR_SPAN_MARGIN_MS = 30 * 60_000;
+/** Margin either side of one measurement, ms (see the file note). */
+export const OUTDOOR_SET_MARGIN_MS = 15 * 60_000;
 /** Fewest points in the span for the logger to stand for it. */
 export const MIN_OUTDOOR_LOGGER_POINTS = 5;
 
@@ -35,8 +41,11 @@ export interface OutdoorLoggerWindow {
   /** First and last point used, ms since 1970. */
   from_ms: number;
   to_ms: number;
-  /** 'measurements' or 'visit': the points of that span; 'whole-record': the span was not covered. */
-  covers: 'measurements' | 'visit' | 'whole-record';
+  /**
+   * 'measurement': the points around one measurement; 'measurements' or 'visit': the points of
+   * that span; 'whole-record': the span was not covered.
+   */
+  covers: 'measurement' | 'measurements' | 'visit' | 'whole-record';
   warnings: EngineWarning[];
 }
 
@@ -61,6 +70,34 @@ function inside(times_ms: readonly number[], from_ms: number, to_ms: number): nu
     if (t >= from_ms && t <= to_ms) picked.push(i);
   });
   return picked;
+}
+
+/**
+ * The outdoor logger's CO2 points around one measurement (first to last reading, ms since 1970,
+ * widened by OUTDOOR_SET_MARGIN_MS), or null when no outdoor logger has 5 points there.
+ * Example: a roof logger at one point a minute and a decay from 10:00 to 10:20 → its 51 points
+ * from 09:45 to 10:35, covers 'measurement'.
+ */
+export function outdoorLoggerAround(doc: SurveyDocument, from_ms: number, to_ms: number): OutdoorLoggerWindow | null {
+  const [lo, hi] = [from_ms - OUTDOOR_SET_MARGIN_MS, to_ms + OUTDOOR_SET_MARGIN_MS];
+  const ranked = doc.series
+    .filter((s) => s.roomId === undefined && (s.co2_ppm?.length ?? 0) > 0)
+    .map((s) => ({ s, picked: inside(s.times_ms, lo, hi) }))
+    .sort((a, b) => b.picked.length - a.picked.length || (a.s.id < b.s.id ? -1 : 1));
+  const best = ranked[0];
+  if (!best || best.picked.length < MIN_OUTDOOR_LOGGER_POINTS) return null;
+  const { s, picked } = best;
+  return {
+    seriesId: s.id,
+    sourceFile: s.sourceFile,
+    instrumentId: s.instrumentId,
+    timeZone: s.timeZone,
+    values: picked.map((i) => s.co2_ppm![i]!),
+    from_ms: s.times_ms[picked[0]!]!,
+    to_ms: s.times_ms[picked[picked.length - 1]!]!,
+    covers: 'measurement',
+    warnings: [],
+  };
 }
 
 /** A logger channel: CO2 (ppm), temperature (°C) or relative humidity (%). */

@@ -9,7 +9,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseSurvey } from '../../src/analysis/analyse-survey.ts';
 import { outdoorFor } from '../../src/analysis/meter-inputs.ts';
-import { outdoorLoggerWindow, OUTDOOR_SPAN_MARGIN_MS } from '../../src/analysis/outdoor-logger-window.ts';
+import { outdoorLoggerAround, outdoorLoggerWindow, OUTDOOR_SET_MARGIN_MS, OUTDOOR_SPAN_MARGIN_MS } from '../../src/analysis/outdoor-logger-window.ts';
 import type { SurveyDocument } from '../../src/model/survey-document.ts';
 import { surveyDocumentSchema } from '../../src/model/survey-document.ts';
 import { demoFile } from '../support/fixtures.ts';
@@ -106,5 +106,31 @@ describe('the outdoor logger in the analysis', () => {
     expect(r.dayOutdoor.rh_pct!.words).toMatch(/^median of the outdoor logger “roof-logger\.csv” from \d\d:\d\d to \d\d:\d\d$/);
     expect(r.dayWeather?.outdoor_C).toBe(-3);
     expect(r.dayWeather?.label).toContain('by the outdoor logger');
+  });
+
+  it('gives each measurement the outdoor level logged while it was measured, not the day’s', () => {
+    // An invented day: 470 ppm outdoors until noon (still morning air), 420 ppm after; no spot readings.
+    const doc = withLogger(school(), roofLogger({ spikes: false, level: 420 }));
+    const series = doc.series.at(-1)!;
+    const noon = Date.UTC(2026, 0, 14, 12, 0);
+    series.co2_ppm = series.co2_ppm!.map((v, i) => (series.times_ms[i]! < noon ? v + 50 : v));
+    doc.survey.outdoorReadings = [];
+    const r = analyseSurvey(doc, { draws: DRAWS });
+    const decays = r.rooms.flatMap((room) => room.measured.filter((m) => m.method.startsWith('decay')).map((m) => ({ room: room.name, m })));
+    expect(decays.length).toBeGreaterThan(1);
+    // A set's times are ISO for readings, ms since 1970 (as text) for a logger period.
+    const ms = (t: string | null) => (Number.isNaN(Date.parse(t!)) ? Number(t) : Date.parse(t!));
+    for (const { m } of decays) {
+      const morning = ms(m.to) < noon;
+      expect(ms(m.from) < noon).toBe(morning); // no decay of the demo runs across noon
+      approxEqual(m.outdoor.value_ppm, morning ? 470 : 420, { abs: 4 });
+      expect(m.outdoor.source).toMatch(/^outdoor logger “roof-logger\.csv”: median of \d+ points/);
+    }
+    // The window around one measurement: 15 minutes either side of its first and last reading.
+    const w = outdoorLoggerAround(doc, Date.UTC(2026, 0, 14, 10, 0), Date.UTC(2026, 0, 14, 10, 20))!;
+    expect(w.covers).toBe('measurement');
+    expect([w.from_ms, w.to_ms]).toEqual([Date.UTC(2026, 0, 14, 10, 0) - OUTDOOR_SET_MARGIN_MS, Date.UTC(2026, 0, 14, 10, 20) + OUTDOOR_SET_MARGIN_MS]);
+    expect(w.values).toHaveLength(51);
+    expect(outdoorLoggerAround(doc, Date.UTC(2026, 0, 15, 10, 0), Date.UTC(2026, 0, 15, 10, 20))).toBeNull();
   });
 });
