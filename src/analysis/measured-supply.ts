@@ -21,7 +21,10 @@
  * counted (no count uncertainty), output per person ±15 % (occupancy-inputs.ts).
  *
  * Best-estimate rule (a measurement always outranks a prediction; this picks among measurements):
- * only kind 'estimate' with a supply and no error-severity warning competes; lower tier wins —
+ * only kind 'estimate' with a supply and no error-severity warning competes; an estimate whose
+ * interval reaches down to no air at all (low end at or below zero, or unknown: a decay cut short
+ * after a few minutes) ranks behind every estimate with a positive low end, so an abandoned test
+ * never displaces a usable reading; then lower tier wins —
  * 0 decay with background, 1 decay (log-linear), 2 build-up fits, 3 two-point forms (decay or
  * build-up), 4 spot reading and near-steady; within a tier the narrower interval relative to its
  * value wins; then the smaller set id (so the choice never depends on order). Every estimate is
@@ -230,6 +233,11 @@ function relativeWidth(m: MeasuredEstimate): number {
   return value !== null && low !== null && high !== null && value > 0 ? (high - low) / value : Number.POSITIVE_INFINITY;
 }
 
+/** 1 when the interval reaches no air at all (its low end unknown or at or below zero), else 0. */
+function unbounded(m: MeasuredEstimate): number {
+  return m.supply_m3s.low !== null && m.supply_m3s.low > 0 ? 0 : 1;
+}
+
 /**
  * The best measured estimate by the rule in the file note, or null.
  * Example: bestMeasured([buildUp, decay]) = decay.
@@ -238,7 +246,7 @@ export function bestMeasured(list: readonly MeasuredEstimate[]): MeasuredEstimat
   const usable = list.filter((m) => m.kind === 'estimate' && m.supply_m3s.value !== null && !m.warnings.some((w) => w.severity === 'error'));
   return (
     [...usable].sort(
-      (a, b) => a.tier - b.tier || relativeWidth(a) - relativeWidth(b) || (a.setId < b.setId ? -1 : a.setId > b.setId ? 1 : 0),
+      (a, b) => unbounded(a) - unbounded(b) || a.tier - b.tier || relativeWidth(a) - relativeWidth(b) || (a.setId < b.setId ? -1 : a.setId > b.setId ? 1 : 0),
     )[0] ?? null
   );
 }

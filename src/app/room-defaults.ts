@@ -22,6 +22,16 @@ export function suggestedHeight(use: RoomUse): number {
   return HEIGHTS[use] ?? 2.4;
 }
 
+const FIRST_USE: Record<BuildingUse, RoomUse> = { school: 'classroom', dwelling: 'bedroom', office: 'office', other: 'other' };
+
+/**
+ * The use a new room's form starts on, from the building's use, so a flat's rooms are not offered
+ * as classrooms. Example: newRoomUse('dwelling') = 'bedroom'.
+ */
+export function newRoomUse(buildingUse: BuildingUse | undefined): RoomUse {
+  return buildingUse ? FIRST_USE[buildingUse] : 'classroom';
+}
+
 export const SCHEDULE_TEMPLATES = [
   { id: 'classroom', label: 'School day (lessons and breaks)' },
   { id: 'office', label: 'Office day' },

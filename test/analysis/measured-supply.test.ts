@@ -75,6 +75,16 @@ describe('best-estimate rule', () => {
     expect(bestMeasured([...list, estimate('e', 'decay-with-background', 0, 0.03, 0.02)])?.setId).toBe('e');
   });
 
+  it('puts an estimate whose interval reaches zero behind a usable one, whatever its tier', () => {
+    // A decay abandoned after three readings in a few minutes: 2 L/s with an interval from −2.7 to
+    // 8.3 m³/s (as seen on the guided test screen); the room's spot reading, 4.5 (2.5–6.5) L/s, stays the best.
+    const cutShort = estimate('d', 'decay-log-linear', 1, 1.98, 0.5, { supply_m3s: { value: 1.98, low: -2.67, high: 8.33 } });
+    const spot = estimate('s', 'spot-reading', 4, 0.0045, 0.002);
+    expect(bestMeasured([cutShort, spot])?.setId).toBe('s');
+    // Alone, it is still the only measurement and is kept (its warnings say why it is weak).
+    expect(bestMeasured([cutShort])?.setId).toBe('d');
+  });
+
   it('breaks a tie by the narrower interval, then by id; skips bounds and errors', () => {
     expect(bestMeasured([estimate('x', 'build-up-known-output', 2, 0.03, 0.01), estimate('y', 'build-up-rate-and-level', 2, 0.03, 0.005)])?.setId).toBe('y');
     expect(bestMeasured([estimate('z', 'decay-log-linear', 1, 0.03, 0.01), estimate('y', 'decay-log-linear', 1, 0.03, 0.01)])?.setId).toBe('y');

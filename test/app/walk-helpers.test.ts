@@ -4,7 +4,7 @@ import { roomGaps } from '../../src/app/room-gaps.ts';
 import { safetyItems } from '../../src/app/safety-items.ts';
 import { bounds, quantity, range, airChanges, duration } from '../../src/app/format-figures.ts';
 import { clockOf, clockSeconds, localIso } from '../../src/app/local-time.ts';
-import { newRoom, suggestedHeight } from '../../src/app/room-defaults.ts';
+import { newRoom, newRoomUse, suggestedHeight } from '../../src/app/room-defaults.ts';
 import { startingConditions } from '../../src/app/new-reading.ts';
 import type { DocumentRoom } from '../../src/model/survey-document.ts';
 import { roomSchema } from '../../src/model/room.ts';
@@ -15,6 +15,14 @@ const room = (): DocumentRoom => ({
 });
 
 describe('walk helpers', () => {
+  it("starts a new room's use from the building's use (a flat's rooms are not classrooms)", () => {
+    expect(newRoomUse('dwelling')).toBe('bedroom');
+    expect(newRoomUse('school')).toBe('classroom');
+    expect(newRoomUse('office')).toBe('office');
+    expect(newRoomUse('other')).toBe('other');
+    expect(suggestedHeight(newRoomUse('dwelling'))).toBe(2.4);
+  });
+
   it('a new room is valid, keeps its size, and takes the day template of its use', () => {
     const r = newRoom({ name: 'Bedroom 1', use: 'bedroom', geometry: { kind: 'area', floorArea_m2: 11, height_m: suggestedHeight('bedroom') } }, new Date());
     expect(roomSchema.safeParse(r).success).toBe(true);
