@@ -50,16 +50,21 @@ function byFigure(a: RoomResults, b: RoomResults): number {
 }
 
 /** A check's value or limit in display units. */
+/** A share of floor area (openable windows for purge) reads as a percentage. */
+const fraction = (x: number | null) => (x === null ? '—' : `${roundToStep(x * 100, 0.1)} % of floor area`);
+
+/** A criterion's limit (SI, in its metric's unit) in words. Example: ('co2-absolute', 1500) = '1500 ppm'. */
+export function limitText(metric: ReportCheckView['metric'], limit: number | null): string {
+  if (limit === null) return '—';
+  const kind = metricKind(metric);
+  if (!kind) return metric === 'opening-area-fraction' ? fraction(limit) : String(limit);
+  const figure = reportFigure('', { value: limit, low: null, high: null }, kind);
+  return `${metric === 'co2-above-outdoor' ? 'above outdoor ' : ''}${rangeText(figure.value, null, null, figure.unit)}`;
+}
+
 export function checkValueText(check: ReportCheckView, which: 'value' | 'limit'): string {
   const kind = metricKind(check.metric);
-  // A share of floor area (openable windows for purge) reads as a percentage.
-  const fraction = (x: number | null) => (x === null ? '—' : `${roundToStep(x * 100, 0.1)} % of floor area`);
-  if (which === 'limit') {
-    if (check.limit === null) return '—';
-    if (!kind) return check.metric === 'opening-area-fraction' ? fraction(check.limit) : String(check.limit);
-    const limit = reportFigure('', { value: check.limit, low: null, high: null }, kind);
-    return `${check.metric === 'co2-above-outdoor' ? 'above outdoor ' : ''}${rangeText(limit.value, null, null, limit.unit)}`;
-  }
+  if (which === 'limit') return limitText(check.metric, check.limit);
   if (!check.value) return '—';
   if (!kind) return check.metric === 'opening-area-fraction' ? fraction(check.value.value ?? check.value.low) : String(check.value.value ?? '—');
   const v = reportFigure('', check.value, kind);

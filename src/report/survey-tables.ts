@@ -18,6 +18,8 @@ import { metricKind, periodWords, sourceWords, statusWords } from './criterion-w
 import type { ReportJudgementView } from './judgement-view.ts';
 import { METHOD_WORDS } from './method-words.ts';
 import { numberText, reportFigure } from './report-figure.ts';
+import { limitText } from './room-ranking.ts';
+import { allCriteria } from '../core/criteria/criteria-sets.ts';
 import { recordedDate, recordedDateTime } from './recorded-time.ts';
 
 const PREDICTION_WORDS: Record<Exclude<AirflowMechanism, 'none'>, { name: string; source: string }> = {
@@ -98,13 +100,29 @@ export function methodRows(results: AnalysisResults): string[][] {
  * when there is one; otherwise those the criteria data holds for the survey's building and room
  * uses, listed for reference and said to be unapplied.
  */
+/**
+ * The surveyor's recorded edits to the criteria set, in words (the report must disclose any
+ * departure from the published figures). Example: 'Changed for this survey: HSE: consistently
+ * above 1500 ppm… — limit 1200 ppm instead of 1500 ppm (stricter client brief).'
+ */
+function editWords(doc: SurveyDocument): string {
+  const choice = doc.survey.criteria;
+  if (!choice || choice.overrides.length === 0) return '';
+  const lines = choice.overrides.map((o) => {
+    const c = allCriteria().find((x) => x.id === o.thresholdId);
+    if (!c) return `${o.thresholdId}: ${numberText(o.value)} (${o.reason})`;
+    return `${c.title} — limit ${limitText(c.metric, o.value)} instead of ${limitText(c.metric, c.limit)} (${o.reason})`;
+  });
+  return ` Changed for this survey: ${lines.join('; ')}.`;
+}
+
 export function criteriaRows(doc: SurveyDocument, judgement: ReportJudgementView | null): { note: string; rows: string[][] } {
   const rows = new Map<string, string[]>();
   if (judgement) {
     for (const room of judgement.rooms.values()) {
       for (const c of room.checks) rows.set(c.criterionId, [c.title, c.source, `${statusWords(c.status)} (${c.role})`, periodWords(c.period), c.caveat || 'confirmed', 'see the room sheets']);
     }
-    return { note: 'The criteria each room was judged against.', rows: [...rows.values()] };
+    return { note: `The criteria each room was judged against.${editWords(doc)}`, rows: [...rows.values()] };
   }
   const survey = doc.survey;
   const uses = [...new Set(doc.rooms.map((r) => r.use))];

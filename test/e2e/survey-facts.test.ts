@@ -242,6 +242,21 @@ describe.skipIf(!baseURL)('survey facts in Chromium (phone)', () => {
     await expect(page.getByText('Spare meter (invented)').count()).resolves.toBe(0);
   });
 
+  it('records an edit to a criterion in the unit the findings show it in, and lists it so', async () => {
+    await page.goto(at('/details'));
+    await page.getByRole('heading', { name: 'Survey details' }).waitFor();
+    await page.getByRole('group', { name: 'Criteria to judge against' }).getByRole('radio').first().check();
+    const select = page.getByLabel('Threshold to change');
+    const option = await select.locator('option', { hasText: /L\/s per person\)$/ }).first();
+    const label = (await option.textContent())!;
+    await select.selectOption({ label });
+    await expect(page.locator('#edit-value').locator('xpath=..').locator('.unit').innerText()).resolves.toBe('L/s per person');
+    await page.getByLabel(/^New value/).fill('10');
+    await page.getByLabel('Reason for the change').fill('Client brief asks for 10 L/s per person (invented)');
+    await page.getByRole('button', { name: 'Record this edit' }).click();
+    await page.getByText(/: 10 L\/s per person — Client brief asks for 10 L\/s per person \(invented\)/).waitFor();
+  });
+
   it('raised no error in the page throughout', () => {
     expect(problems).toEqual([]);
   });

@@ -175,4 +175,13 @@ describe('buildReport on other surveys', () => {
       { numRuns: 15, seed: 8 },
     );
   });
+
+  it('discloses the surveyor’s recorded edits to the criteria beside the criteria table, in the unit shown', () => {
+    const doc = docs()[0]!;
+    doc.survey.criteria = { setId: 'schools', version: '1', overrides: [{ thresholdId: 'hse-co2-action', value: 1200, reason: 'stricter client brief (invented)' }] };
+    const results = analyseSurvey(doc, { draws: DRAWS });
+    const model = buildReport(doc, results, OPTIONS);
+    expect(model.criteria.note).toMatch(/Changed for this survey: .+ — limit 1200 ppm instead of 1500 ppm \(stricter client brief \(invented\)\)\.$/);
+    expect(buildReport(docs()[0]!, analyseSurvey(docs()[0]!, { draws: DRAWS }), OPTIONS).criteria.note).not.toMatch(/Changed for this survey/);
+  });
 });
