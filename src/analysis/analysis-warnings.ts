@@ -51,7 +51,8 @@ export type AnalysisWarningCode =
   | 'outdoor-humidity-from-visit'
   | 'too-cold-for-ventilation'
   | 'no-single-fix'
-  | 'bedrooms-unknown';
+  | 'bedrooms-unknown'
+  | 'interval-reaches-zero';
 
 export interface AnalysisWarning {
   code: WarningCode | AirflowWarningCode | MoistureWarningCode | AnalysisWarningCode;

@@ -90,6 +90,8 @@ export interface MeasurementContext {
 /** A finite number or null. */
 const finite = (v: number | null): number | null => (v !== null && Number.isFinite(v) ? v : null);
 const ranged = (f: EngineFigure): Ranged => ({ value: finite(f.value), low: finite(f.low), high: finite(f.high) });
+/** A flow or rate: none of its ends below zero. */
+const atLeastZero = (r: Ranged): Ranged => ({ value: r.value === null ? null : Math.max(0, r.value), low: r.low === null ? null : Math.max(0, r.low), high: r.high === null ? null : Math.max(0, r.high) });
 
 function occupantUncertainty(occ: RoomOccupancy): OccupantUncertainty | undefined {
   const n = occ.figures.count;
@@ -194,15 +196,26 @@ function toMeasured(
   state: RoomState | null,
 ): MeasuredEstimate {
   const o = e.assumed.outdoor;
+  // No flow is negative: an interval reaching below zero is cut there, and said to reach "none".
+  const reachesZero = e.supply_m3s.low !== null && Number.isFinite(e.supply_m3s.low) && e.supply_m3s.low <= 0;
+  const zeroWarning = reachesZero
+    ? [
+        analysisWarning(
+          'interval-reaches-zero',
+          'caution',
+          'This measurement’s interval reaches no outdoor air at all: it cannot show the room gets any. Take more readings over a longer time, or another kind of test.',
+        ),
+      ]
+    : [];
   return {
     setId: set.setId,
     source: set.source,
     setKind: set.setKind,
     method: e.method,
     kind: e.kind,
-    supply_m3s: ranged(e.supply_m3s),
-    airChangeRate_perSecond: ranged(e.airChangeRate_perSecond),
-    supplyPerPerson_m3s: ranged(e.supplyPerPerson_m3s),
+    supply_m3s: atLeastZero(ranged(e.supply_m3s)),
+    airChangeRate_perSecond: atLeastZero(ranged(e.airChangeRate_perSecond)),
+    supplyPerPerson_m3s: atLeastZero(ranged(e.supplyPerPerson_m3s)),
     steadyLevel_ppm: ranged(e.steadyLevel_ppm),
     tier: METHOD_TIER[e.method],
     readingsUsed: set.readings.length,
@@ -223,7 +236,7 @@ function toMeasured(
     },
     outdoor: { value_ppm: o.value_ppm, sd_ppm: o.sd_ppm, sameMeterAsRoom: o.sameMeterAsRoom, readings: o.readings, source: o.source },
     details: Object.fromEntries(Object.entries(e.details).map(([k, v]) => [k, finite(v)])),
-    warnings: uniqueWarnings([...setWarnings, ...e.warnings.map(fromEngineWarning)]),
+    warnings: uniqueWarnings([...setWarnings, ...e.warnings.map(fromEngineWarning), ...zeroWarning]),
   };
 }
 

@@ -85,6 +85,23 @@ describe('best-estimate rule', () => {
     expect(bestMeasured([cutShort])?.setId).toBe('d');
   });
 
+  it('never gives a flow below zero: a flat, cut-short decay is cut at zero and says it cannot show any air', () => {
+    const doc = structuredClone(school());
+    const b1 = doc.rooms.find((r) => r.name === 'Classroom B1')!;
+    const decay = b1.tests.find((t) => t.kind === 'decay')!;
+    // Three readings two minutes apart that hardly move (invented): the fitted slope's interval spans zero.
+    const kept = decay.readingIds.slice(0, 3);
+    const levels = [1500, 1512, 1496];
+    b1.readings = b1.readings.map((r) => (kept.includes(r.id) ? { ...r, co2_ppm: levels[kept.indexOf(r.id)]! } : r));
+    decay.readingIds = kept;
+    const room = analyseSurvey(doc, { draws: 200 }).rooms.find((r) => r.roomId === b1.id)!;
+    const fit = room.measured.find((m) => m.setId === decay.id && m.method.startsWith('decay'))!;
+    expect(fit.supply_m3s.low).toBe(0);
+    expect(fit.airChangeRate_perSecond.low).toBe(0);
+    expect(fit.warnings.map((w) => w.code)).toContain('interval-reaches-zero');
+    for (const m of room.measured) for (const f of [m.supply_m3s, m.airChangeRate_perSecond]) for (const x of [f.value, f.low, f.high]) if (x !== null) expect(x).toBeGreaterThanOrEqual(0);
+  });
+
   it('breaks a tie by the narrower interval, then by id; skips bounds and errors', () => {
     expect(bestMeasured([estimate('x', 'build-up-known-output', 2, 0.03, 0.01), estimate('y', 'build-up-rate-and-level', 2, 0.03, 0.005)])?.setId).toBe('y');
     expect(bestMeasured([estimate('z', 'decay-log-linear', 1, 0.03, 0.01), estimate('y', 'decay-log-linear', 1, 0.03, 0.01)])?.setId).toBe('y');
