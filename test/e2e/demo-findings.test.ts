@@ -92,6 +92,12 @@ describe.skipIf(!baseURL)('demo surveys in Chromium (phone)', () => {
     await page.keyboard.type('812');
     await tabTo(page, page.getByRole('button', { name: 'Save reading' }));
     await page.keyboard.press('Space');
+    // Not saved until the conditions are looked at: one required tap, and the focus is taken there.
+    await page.getByText('Conditions: look at the room and tick “Conditions checked now”, changing any that differ').waitFor();
+    await expect(page.getByLabel('Conditions checked now').evaluate((el) => el === document.activeElement)).resolves.toBe(true);
+    await page.keyboard.press('Space');
+    await tabTo(page, page.getByRole('button', { name: 'Save reading' }));
+    await page.keyboard.press('Space');
     await expect.poll(() => page.locator('#section-readings li').count()).toBe(before + 1);
 
     await page.goto(`${baseURL}#/survey/${doc.survey.id}`);

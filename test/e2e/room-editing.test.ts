@@ -55,6 +55,7 @@ describe.skipIf(!baseURL)('editing a room in Chromium (phone)', () => {
     await page.getByRole('button', { name: 'Reading now' }).click();
     await page.getByLabel('CO₂', { exact: true }).fill('1400');
     await page.getByLabel('Temperature', { exact: true }).fill('20');
+    await page.getByLabel('Conditions checked now').check();
     await page.getByRole('button', { name: 'Save reading' }).click();
     await page.getByText('1400 ppm CO₂').waitFor();
   });
