@@ -31,6 +31,14 @@ const PATTERNS: Record<string, string> = {
   widespread: 'widespread',
 };
 
+const ISOLATOR: Record<string, string> = { on: 'isolator on', off: 'isolator off', none: 'no isolator fitted', 'not-found': 'isolator not found' };
+const DUCTING: Record<string, string> = { ducted: 'ducted outside', recirculating: 'recirculating', 'through-wall': 'through the wall' };
+
+/** A yes / no / not-checked answer in words. Example: checkWords('not-checked') = 'not checked'. */
+export function checkWords(answer: string): string {
+  return answer === 'not-checked' ? 'not checked' : answer;
+}
+
 function shown(si: number, kind: Parameters<typeof displayQuantity>[1]): string {
   const d = displayQuantity(si, kind);
   return `${numberText(d.value)} ${d.unit}`;
@@ -50,10 +58,11 @@ export function openingWords(o: Opening): string {
     case 'fan': {
       const rated = o.ratedFlow_m3s !== undefined ? `rated ${shown(o.ratedFlow_m3s, 'flow')}` : 'rating not known';
       const measured = o.measuredFlow_m3s !== undefined ? `measured ${shown(o.measuredFlow_m3s, 'flow')}` : 'flow not measured';
-      return `${o.count} × ${o.direction} fan (${o.ducting}): ${rated}, ${measured}; isolator ${o.isolator}${condition}`;
+      return `${o.count} × ${o.direction} fan (${DUCTING[o.ducting] ?? o.ducting}): ${rated}, ${measured}; ${ISOLATOR[o.isolator] ?? o.isolator}${condition}`;
     }
     case 'undercut':
-      return `${o.count} × door undercut: ${shown(o.gap_m, 'length')} gap under a ${shown(o.doorWidth_m, 'length')} door${condition}`;
+      // A gap under a door is measured in millimetres.
+      return `${o.count} × door undercut: ${numberText(Math.round(o.gap_m * 1000))} mm gap under a ${shown(o.doorWidth_m, 'length')} door${condition}`;
   }
 }
 
@@ -64,8 +73,11 @@ export function defectWords(d: Defect): string {
   return `${DEFECTS[d.kind]}${d.location ? ` at ${d.location}` : ''}${extent}${pattern}${d.notes ? `. ${d.notes}` : ''}`;
 }
 
-/** The schedule in words. Example: '22:30–07:00 full (Asleep)'. */
-export function scheduleWords(schedule: Schedule): string {
-  if (schedule.periods.length === 0) return 'No schedule recorded';
+/**
+ * The schedule in words; without periods of its own, the day the findings used instead (`used`,
+ * e.g. 'the bedroom template (invented timetable)'). Example: '22:30–07:00 full (Asleep)'.
+ */
+export function scheduleWords(schedule: Schedule, used?: string): string {
+  if (schedule.periods.length === 0) return used ? `None recorded for the room: the findings use ${used}` : 'No schedule recorded';
   return schedule.periods.map((p) => `${p.start}–${p.end} ${p.presence}${p.label ? ` (${p.label})` : ''}`).join('; ');
 }

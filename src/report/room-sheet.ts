@@ -16,7 +16,7 @@ import type { ReportCheckView, ReportJudgementView } from './judgement-view.ts';
 import { BASIS_WORDS, boundsFigure, displayNumber, numberText, rangeText, reportFigure, type ReportFigure } from './report-figure.ts';
 import type { ReportChart, RoomSheet } from './report-model.ts';
 import { clockSeconds, recordedClock, recordedDate } from './recorded-time.ts';
-import { defectWords, openingWords, scheduleWords } from './record-words.ts';
+import { checkWords, defectWords, openingWords, scheduleWords } from './record-words.ts';
 import { checkValueText, PRIORITY_WORDS } from './room-ranking.ts';
 import { METHOD_WORDS } from './method-words.ts';
 import { roomPlace } from './room-place.ts';
@@ -224,13 +224,14 @@ export function buildRoomSheet(doc: SurveyDocument, results: AnalysisResults, ro
         ['Size', `${shownFact(room.floorArea_m2, 'area')} floor, ${shownFact(room.ceilingHeight_m, 'length')} high, ${shownFact(room.volume_m3, 'volume')}`],
         ['People as found', `${asFound.count}${groups ? ` (${groups})` : ''}, ${BASIS_WORDS[asFound.basis]}`],
         ['People at full use', `${room.occupancy.design.count}, ${BASIS_WORDS[room.occupancy.design.basis]}`],
-        ['Schedule', scheduleWords(record.schedule)],
+        ['Schedule', scheduleWords(record.schedule, room.scenarios.find((s) => s.id === 'as-found')?.profile?.schedule)],
         ['Room temperature', reportFigure('', room.roomTemp_C, 'temperature').text],
       ],
       openings: record.openings.map(openingWords),
       defects: record.defects.map(defectWords),
       appliances: record.appliances.map(
-        (a) => `${applianceWords(a)}: combustion-air vent ${a.combustionAirVentPresent}${a.combustionAirVentPresent === 'yes' ? ` (clear: ${a.combustionAirVentClear})` : ''}; CO alarm ${a.coAlarmPresent}${a.coAlarmPresent === 'yes' ? ` (tested: ${a.coAlarmTested})` : ''}; gas safety record seen: ${a.gasSafetyRecordSeen}`,
+        (a) =>
+          `${applianceWords(a)}: combustion-air vent ${checkWords(a.combustionAirVentPresent)}${a.combustionAirVentPresent === 'yes' ? ` (clear: ${checkWords(a.combustionAirVentClear)})` : ''}; CO alarm ${checkWords(a.coAlarmPresent)}${a.coAlarmPresent === 'yes' ? ` (tested: ${checkWords(a.coAlarmTested)})` : ''}; gas safety record seen: ${checkWords(a.gasSafetyRecordSeen)}`,
       ),
       interview: record.interview.map((i) => `${i.topic}: ${i.answer}`),
       notes: record.notes,
