@@ -38,6 +38,8 @@ export function summaryOf(
     }
     const order: ReportUrgency[] = ['immediate', 'weeks', 'planned', 'none'];
     actions.sort((a, b) => order.indexOf(a.urgency as ReportUrgency) - order.indexOf(b.urgency as ReportUrgency));
+    // The safety items come before any improvement, and they are actions too.
+    if (safety.length) actions.unshift({ urgency: 'immediate', text: 'The safety items above, before anything else: each says what to do and who should do it.' });
   } else {
     if (safety.length) actions.push({ urgency: 'not-judged', text: 'Have the safety items above checked by a competent engineer (gas, solid fuel or electrical as they concern).' });
     for (const row of ranked) {

@@ -184,4 +184,14 @@ describe('buildReport on other surveys', () => {
     expect(model.criteria.note).toMatch(/Changed for this survey: .+ — limit 1200 ppm instead of 1500 ppm \(stricter client brief \(invented\)\)\.$/);
     expect(buildReport(docs()[0]!, analyseSurvey(docs()[0]!, { draws: DRAWS }), OPTIONS).criteria.note).not.toMatch(/Changed for this survey/);
   });
+
+  it('puts the safety items first in “What to do” when there are any, and not otherwise', () => {
+    for (const doc of docs()) {
+      const model = buildReport(doc, analyseSurvey(doc, { draws: DRAWS }), OPTIONS);
+      const first = model.summary.actions[0];
+      if (model.summary.safety.length > 0) expect(first).toEqual({ urgency: 'immediate', text: 'The safety items above, before anything else: each says what to do and who should do it.' });
+      else expect(model.summary.actions.some((a) => a.text.startsWith('The safety items above'))).toBe(false);
+    }
+    expect(docs().some((doc) => buildReport(doc, analyseSurvey(doc, { draws: DRAWS }), OPTIONS).summary.safety.length > 0)).toBe(true);
+  });
 });
