@@ -6,7 +6,7 @@
  * Examples: quantity(0.0523, 'flow') = '52.5 L/s'; range({ value: 0.01, low: 0.008, high: 0.013 },
  * 'flow') = '10 L/s (8–13 L/s)'.
  */
-import { displayQuantity, perHour, roundToStep, type QuantityKind, type UnitSystem } from '../core/units.ts';
+import { displayQuantity, perHour, roundToStep, toDisplayUnits, type QuantityKind, type UnitSystem } from '../core/units.ts';
 import { metricQuantityKind } from '../core/criteria/metric-quantity.ts';
 import type { CriterionMetric } from '../core/criteria/criterion.ts';
 import type { Basis, Ranged } from '../analysis/results.ts';
@@ -64,10 +64,17 @@ export function airChanges(perSecond: Ranged, units: UnitSystem = 'si'): string 
  * A criterion check's figure (its value or limit, SI in the metric's unit) as people read it.
  * Example: criterionFigure('co2-above-outdoor', 800) = '800 ppm'; ('air-change-rate', 1/900) = '4 h⁻¹'.
  */
-export function criterionFigure(metric: CriterionMetric, si: number | null, units: UnitSystem = 'si'): string {
+export function criterionFigure(metric: CriterionMetric, si: number | null, units: UnitSystem = 'si', limit?: number | null): string {
   if (si === null || !Number.isFinite(si)) return 'not known';
   if (metric === 'opening-area-fraction') return `${roundToStep(si * 100, 0.1)}% of floor area`;
   const kind = metricQuantityKind(metric);
   if (!kind) return String(si);
-  return quantity(kind === 'airChanges' ? perHour(si) : si, kind, units);
+  const shown = kind === 'airChanges' ? perHour(si) : si;
+  const text = quantity(shown, kind, units);
+  // Beside its limit, a value that rounds to the limit's own figure but is not the limit keeps
+  // a finer step, so "79.6 %" never reads as "80 %" next to "limit 80 %".
+  if (limit === undefined || limit === null || si === limit || text !== criterionFigure(metric, limit, units)) return text;
+  const { step, unit } = displayQuantity(shown, kind, units);
+  const fine = NUMBER.format(roundToStep(toDisplayUnits(shown, kind, units), step / 10));
+  return unit === '%' ? `${fine}%` : `${fine} ${unit}`;
 }

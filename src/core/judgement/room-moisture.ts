@@ -145,7 +145,13 @@ export function roomMoisture(input: RoomMoistureInput): RoomMoisture {
   } else {
     const u = wallRh.unfavourable;
     const f = wallRh.favourable;
-    const words = (x: number | null) => (x === null ? 'saturated (no steady state)' : `${Math.round(Math.min(x, 100))} %`);
+    // Whole percent, except that a value just under the limit never prints as the limit itself
+    // (79.6 % is "79.6 %", not "80 %", beside "below 80 %").
+    const words = (x: number | null) => {
+      if (x === null) return 'saturated (no steady state)';
+      const whole = Math.round(Math.min(x, 100));
+      return x < MOULD_SURFACE_RH_PCT && whole >= MOULD_SURFACE_RH_PCT ? `${Math.floor(x * 10) / 10} %` : `${whole} %`;
+    };
     if (u !== null && u < MOULD_SURFACE_RH_PCT) {
       mould = { verdict: 'no-risk-predicted', reason: `Predicted monthly-mean RH on the coldest wall ${words(f)}–${words(u)}, below 80 % even at the unfavourable end, for a typical coldest month.`, basis: 'predicted' };
     } else if (f === null || f >= MOULD_SURFACE_RH_PCT) {
