@@ -2,7 +2,9 @@
  * Settling timers: a meter needs about 1–3 minutes for CO₂, and 10–20 minutes for humidity after
  * a change of temperature, before its reading can be trusted (practice.md §2.4; common practice
  * (no published source) for the defaults of 2 and 15 minutes). The app keeps time so the surveyor
- * need not; a timer runs on across screens until it is done or restarted.
+ * need not; a timer runs on across screens until it is done or restarted, and remembers where it
+ * was started ("outdoors", a room's name), so a timer started at the door does not pass for the
+ * room's own.
  */
 export const SETTLE_S = { co2: 120, humidity: 900 } as const;
 export type SettleKind = keyof typeof SETTLE_S;
@@ -10,12 +12,15 @@ export type SettleKind = keyof typeof SETTLE_S;
 class SettleTimers {
   /** When each timer ends (ms since 1970), or null. */
   endsAt = $state<Record<SettleKind, number | null>>({ co2: null, humidity: null });
+  /** Where each timer was started (a place's name), or null. */
+  startedAt = $state<Record<SettleKind, string | null>>({ co2: null, humidity: null });
   /** The clock, ticking once a second while a timer runs. */
   now = $state(Date.now());
   private ticker: ReturnType<typeof setInterval> | undefined;
 
-  start(kind: SettleKind, seconds: number = SETTLE_S[kind]): void {
+  start(kind: SettleKind, place: string | null = null, seconds: number = SETTLE_S[kind]): void {
     this.now = Date.now();
+    this.startedAt[kind] = place;
     this.endsAt[kind] = this.now + seconds * 1000;
     this.ticker ??= setInterval(() => this.tick(), 1000);
   }
