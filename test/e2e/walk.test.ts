@@ -74,6 +74,8 @@ describe.skipIf(!baseURL)('the walk in Chromium (phone)', () => {
     await page.getByLabel('In words').fill('Overcast, light wind from the west');
     await page.getByText('Light', { exact: true }).click();
     await page.getByTestId('save-status').getByText(/Saved on this device/).waitFor();
+    // The day's temperature left empty: the screen says what the findings take instead.
+    await page.getByTestId('day-used').getByText(/^Left empty, so the findings use 4\.5 °C \(mean of 1 outdoor reading\)/).waitFor({ timeout: 30_000 });
     await shot('visit');
     await page.getByRole('link', { name: 'Go to the rooms' }).click();
   });
