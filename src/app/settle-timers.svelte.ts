@@ -46,3 +46,8 @@ export const settleTimers = new SettleTimers();
 export function clock(seconds: number): string {
   return `${Math.floor(seconds / 60)}:${String(Math.floor(seconds % 60)).padStart(2, '0')}`;
 }
+
+/** The place a room's timers are started for (its name). Example: settlePlace({ name: '' }) = 'this room'. */
+export function settlePlace(room: { name: string }): string {
+  return room.name || 'this room';
+}
