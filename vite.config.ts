@@ -6,6 +6,7 @@ import { VitePWA } from 'vite-plugin-pwa';
 import { readFileSync } from 'node:fs';
 import { manifest } from './src/pwa/manifest.ts';
 import { optionalChunkName, precacheGlobs, precacheIgnores } from './src/pwa/precache-rule.ts';
+import { EAGER_COMPILE_HINT, wantsEagerCompile } from './src/pwa/eager-compile.ts';
 
 const here = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 const pkg = JSON.parse(readFileSync(here('./package.json'), 'utf8')) as { version: string };
@@ -36,6 +37,20 @@ export default defineConfig({
   server: { host: '127.0.0.1' },
   plugins: [
     svelte({ configFile: here('./svelte.config.js') }),
+    {
+      // After minifying (which would drop it): the hint that has a chunk compiled as it streams in.
+      name: 'eager-compile-hint',
+      apply: 'build',
+      enforce: 'post',
+      generateBundle: {
+        order: 'post',
+        handler(_options, bundle) {
+          for (const chunk of Object.values(bundle)) {
+            if (chunk.type === 'chunk' && wantsEagerCompile(chunk.fileName)) chunk.code = EAGER_COMPILE_HINT + chunk.code;
+          }
+        },
+      },
+    },
     VitePWA({
       registerType: 'prompt',
       injectRegister: false,
