@@ -10,12 +10,11 @@ import { displayQuantity, perHour, roundToStep, type QuantityKind, type UnitSyst
 import { metricQuantityKind } from '../core/criteria/metric-quantity.ts';
 import type { CriterionMetric } from '../core/criteria/criterion.ts';
 import type { Basis, Ranged } from '../analysis/results.ts';
-
-const NUMBER = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 6 });
+import { plainNumber } from './plain-number.ts';
 
 function number(si: number, kind: QuantityKind, units: UnitSystem): { text: string; unit: string } {
   const shown = displayQuantity(si, kind, units);
-  return { text: NUMBER.format(shown.value), unit: shown.unit };
+  return { text: plainNumber(shown.value), unit: shown.unit };
 }
 
 /** One value with its unit. */
