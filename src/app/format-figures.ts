@@ -10,12 +10,11 @@ import { displayQuantity, perHour, roundToStep, toDisplayUnits, type QuantityKin
 import { metricQuantityKind } from '../core/criteria/metric-quantity.ts';
 import type { CriterionMetric } from '../core/criteria/criterion.ts';
 import type { Basis, Ranged } from '../analysis/results.ts';
-
-const NUMBER = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 6 });
+import { plainNumber } from './plain-number.ts';
 
 function number(si: number, kind: QuantityKind, units: UnitSystem): { text: string; unit: string } {
   const shown = displayQuantity(si, kind, units);
-  return { text: NUMBER.format(shown.value), unit: shown.unit };
+  return { text: plainNumber(shown.value), unit: shown.unit };
 }
 
 /** One value with its unit. */
@@ -75,6 +74,6 @@ export function criterionFigure(metric: CriterionMetric, si: number | null, unit
   // a finer step, so "79.6 %" never reads as "80 %" next to "limit 80 %".
   if (limit === undefined || limit === null || si === limit || text !== criterionFigure(metric, limit, units)) return text;
   const { step, unit } = displayQuantity(shown, kind, units);
-  const fine = NUMBER.format(roundToStep(toDisplayUnits(shown, kind, units), step / 10));
+  const fine = plainNumber(roundToStep(toDisplayUnits(shown, kind, units), step / 10));
   return unit === '%' ? `${fine}%` : `${fine} ${unit}`;
 }
