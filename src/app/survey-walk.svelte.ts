@@ -226,6 +226,7 @@ class SurveyWalk {
     const plan = areaRemovalPlan(doc.areas, doc.rooms, areaId);
     this.areaSaves.get(areaId)?.closeForm();
     this.areaSaves.delete(areaId);
+    this.lastValidAreas.delete(areaId);
     delete this.areaProblems[areaId];
     if (plan) {
       doc.areas = doc.areas.filter((a) => a.id !== areaId).map((a) => (plan.areaIds.includes(a.id) ? movedTo(a, 'parentId', plan.parentId) : a));
@@ -283,6 +284,7 @@ class SurveyWalk {
     await deleteRoom(connection, this.doc!.survey.id, roomId, now.toISOString());
     if (room) this.doc!.areas = this.doc!.areas.map((a) => withoutTerminalRoom(a, room));
     this.doc!.rooms = this.doc!.rooms.filter((r) => r.id !== roomId);
+    this.lastValidRooms.delete(roomId);
     this.photos = this.photos.filter((p) => p.roomId !== roomId);
     this.analyse();
   }

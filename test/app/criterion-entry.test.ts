@@ -1,7 +1,7 @@
 /**
  * Recorded edits to the criteria are typed in the unit the findings show (src/app/criterion-entry.ts)
  * and stored in SI. Conversion factors from the SI definitions: 1 L = 0.001 m³ and 1 mm² = 1e-6 m²
- * (SI Brochure, 9th edition, 2019, Table 8 for the litre); 1 h = 3600 s.
+ * (SI Brochure, 9th edition, 2019, the table of non-SI units accepted for use with the SI; table number from memory); 1 h = 3600 s.
  */
 import { describe, it, expect } from 'vitest';
 import { criterionEntry } from '../../src/app/criterion-entry.ts';
